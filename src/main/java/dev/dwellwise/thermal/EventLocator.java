@@ -1,0 +1,64 @@
+package dev.dwellwise.thermal;
+
+import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.analysis.solvers.BracketingNthOrderBrentSolver;
+import org.apache.commons.math3.optim.MaxEval;
+import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
+import org.apache.commons.math3.optim.univariate.BrentOptimizer;
+import org.apache.commons.math3.optim.univariate.SearchInterval;
+import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
+
+/**
+ * Root finding and maximisation on dense output: events are placed where the interpolant crosses
+ * the threshold, to {@link #TIME_ACCURACY} seconds, never rounded to a step end.
+ */
+final class EventLocator {
+
+    /** Absolute accuracy of an event time, seconds: far inside the 0.05 s target. */
+    static final double TIME_ACCURACY = 1e-9;
+
+    private EventLocator() {
+    }
+
+    /** The root of g in [a, b], where g(a) and g(b) differ in sign (or one is zero). */
+    static double root(DoubleUnaryOperator g, double a, double b) {
+        double ga = g.applyAsDouble(a);
+        double gb = g.applyAsDouble(b);
+        if (ga == 0) {
+            return a;
+        }
+        if (gb == 0) {
+            return b;
+        }
+        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-15, TIME_ACCURACY, 1e-14, 5);
+        return solver.solve(200, g::applyAsDouble, a, b);
+    }
+
+    /**
+     * The first time at which g rises from negative to zero or above, between consecutive scan
+     * points; NaN when it stays negative. The first scan point is the segment start, where g is
+     * known to be negative (the caller checked the condition there).
+     */
+    static double firstRise(DoubleUnaryOperator g, double[] scan) {
+        double previous = g.applyAsDouble(scan[0]);
+        for (int i = 1; i < scan.length; i++) {
+            double current = g.applyAsDouble(scan[i]);
+            if (previous < 0 && current >= 0) {
+                return root(g, scan[i - 1], scan[i]);
+            }
+            if (previous >= 0) {
+                return scan[i - 1];
+            }
+            previous = current;
+        }
+        return Double.NaN;
+    }
+
+    /** The largest value of f on [a, b]. */
+    static double maximum(DoubleUnaryOperator f, double a, double b) {
+        BrentOptimizer optimizer = new BrentOptimizer(1e-12, 1e-9);
+        double best = optimizer.optimize(new MaxEval(200), new UnivariateObjectiveFunction(f::applyAsDouble),
+                GoalType.MAXIMIZE, new SearchInterval(a, b)).getValue();
+        return Math.max(best, Math.max(f.applyAsDouble(a), f.applyAsDouble(b)));
+    }
+}

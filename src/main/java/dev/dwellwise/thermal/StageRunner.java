@@ -1,0 +1,277 @@
+package dev.dwellwise.thermal;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.DoubleUnaryOperator;
+
+/**
+ * Runs a {@link ThermalProblem} through any back end's {@link Stepper}: stage after stage on one
+ * clock, ending each stage at its condition (located by root finding on the dense output, never
+ * rounded to a step), at its duration, or at its maxSeconds bound; sampling at absolute multiples
+ * of the sample spacing plus every boundary; and gathering the per-stage figures.
+ *
+ * <p>Every segment is scanned at its knots and knot midpoints; a sign change of an event function
+ * between two scan points is refined with {@link EventLocator}. A double crossing inside half a
+ * step would go unseen, which the step-size control makes far smaller than the tolerances.
+ */
+public final class StageRunner {
+
+    /** Times closer than this are the same instant (a sample on a stage boundary appears once). */
+    private static final double SAME_INSTANT = 1e-9;
+
+    private final ThermalProblem problem;
+    private final Stepper stepper;
+    private final SampledSeries series;
+    private final DenseHistory dense = new DenseHistory();
+    private final List<Profile> profiles = new ArrayList<>();
+    private final List<Double> pendingProfiles;
+    private double largestRate = 0;
+    private double peakK;
+
+    private StageRunner(ThermalProblem problem, Stepper stepper) {
+        this.problem = problem;
+        this.stepper = stepper;
+        this.series = new SampledSeries(problem.budget().maxSamples());
+        this.pendingProfiles = new ArrayList<>(problem.profileTimes());
+        this.pendingProfiles.sort(Double::compare);
+        this.peakK = problem.part().initialK();
+    }
+
+    /** Computes the history of the problem with the model. */
+    public static ThermalHistory run(ThermalProblem problem, ThermalModel model) {
+        Stepper stepper = model.newStepper(problem.part(), problem.budget());
+        return new StageRunner(problem, stepper).runAll(model.name());
+    }
+
+    private ThermalHistory runAll(String modelName) {
+        List<StageOutcome> outcomes = new ArrayList<>();
+        takeProfilesUpTo(0, null);
+        for (int i = 0; i < problem.stages().size(); i++) {
+            outcomes.add(runStage(i, problem.stages().get(i)));
+        }
+        double end = stepper.time();
+        series.add(end, stepper.observe(), problem.stages().size() - 1);
+        return new ThermalHistory(modelName, outcomes, series, dense, profiles, largestRate, peakK,
+                stepper.steps(), stepper.evaluations());
+    }
+
+    private StageOutcome runStage(int index, StageConditions stage) {
+        stepper.enterStage(stage);
+        double start = stepper.time();
+        double bound = start + stage.boundSeconds();
+        Observation first = stepper.observe();
+        series.add(start, first, index);
+        StageFigures figures = new StageFigures(problem.part().emissivity(), stage, start, first);
+        HoldClock hold = stage.end() instanceof EndCondition.HoldAbove h
+                ? new HoldClock(h.kelvin(), h.seconds(), first.coldestK()) : null;
+
+        StageEnd ended = null;
+        if (alreadyMet(stage.end(), first)) {
+            ended = StageEnd.REACHED;
+        }
+        if (hold != null && hold.isComplete()) {
+            ended = StageEnd.HOLD_COMPLETE;
+        }
+        while (ended == null) {
+            if (bound - stepper.time() <= SAME_INSTANT) {
+                ended = stage.end() instanceof EndCondition.AfterDuration
+                        ? StageEnd.DURATION : StageEnd.MAX_SECONDS;
+                break;
+            }
+            Segment segment = stepper.advance(bound);
+            checkBudget();
+            double[] scan = scanPoints(segment);
+            double eventTime = findEvent(stage.end(), hold, segment, scan);
+            double keptEnd = Double.isNaN(eventTime) ? segment.end() : eventTime;
+            dense.add(segment, segment.start(), keptEnd);
+            figures.cover(segment, scan, keptEnd);
+            largestRate = Math.max(largestRate, figures.largestRate);
+            peakK = Math.max(peakK, figures.peakK);
+            sampleInside(segment, segment.start(), keptEnd, index);
+            takeProfilesUpTo(keptEnd, segment);
+            if (!Double.isNaN(eventTime)) {
+                stepper.cutAt(eventTime);
+                ended = hold != null ? StageEnd.HOLD_COMPLETE : StageEnd.REACHED;
+            }
+        }
+        Observation last = stepper.observe();
+        double endTime = stepper.time();
+        double lowK = Math.min(figures.lowK, last.coldestK());
+        double highK = Math.max(figures.peakK, last.hottestK());
+        double k = problem.part().effectiveConductivity(lowK, highK);
+        double biot = (stage.convection() + figures.largestHr) * problem.part().characteristicLengthM() / k;
+        return new StageOutcome(stage, start, endTime, ended, first, last, figures.peakK, figures.largestHr,
+                biot, SteadyState.of(stage, problem.part().emissivity()),
+                hold == null ? 0 : hold.accumulated);
+    }
+
+    private static boolean alreadyMet(EndCondition end, Observation o) {
+        if (end instanceof EndCondition.ColdestReaches c) {
+            return o.coldestK() >= c.kelvin();
+        }
+        if (end instanceof EndCondition.HottestFallsTo c) {
+            return o.hottestK() <= c.kelvin();
+        }
+        return false;
+    }
+
+    /** The first time in the segment at which the stage's condition is met, or NaN. */
+    private static double findEvent(EndCondition end, HoldClock hold, Segment segment, double[] scan) {
+        if (end instanceof EndCondition.ColdestReaches c) {
+            return EventLocator.firstRise(t -> segment.at(t).coldestK() - c.kelvin(), scan);
+        }
+        if (end instanceof EndCondition.HottestFallsTo c) {
+            return EventLocator.firstRise(t -> c.kelvin() - segment.at(t).hottestK(), scan);
+        }
+        if (hold != null) {
+            return hold.advance(t -> segment.at(t).coldestK(), scan);
+        }
+        return Double.NaN;
+    }
+
+    private void sampleInside(Segment segment, double from, double to, int stageIndex) {
+        double dt = problem.sampleSeconds();
+        long k = (long) Math.floor(from / dt) + 1;
+        for (double t = k * dt; t < to - SAME_INSTANT; t = (++k) * dt) {
+            if (t > from + SAME_INSTANT) {
+                series.add(t, segment.at(t), stageIndex);
+            }
+        }
+    }
+
+    private void takeProfilesUpTo(double to, Segment segment) {
+        while (!pendingProfiles.isEmpty() && pendingProfiles.get(0) <= to + SAME_INSTANT) {
+            double t = pendingProfiles.remove(0);
+            double[] temps = segment == null ? initialProfile() : segment.profileAt(Math.max(segment.start(), t));
+            profiles.add(new Profile(t, stepper.profilePositionsM(), temps));
+        }
+    }
+
+    private double[] initialProfile() {
+        double[] temps = new double[stepper.profilePositionsM().length];
+        java.util.Arrays.fill(temps, problem.part().initialK());
+        return temps;
+    }
+
+    private void checkBudget() {
+        ComputeBudget budget = problem.budget();
+        if (stepper.steps() > budget.maxSteps()) {
+            throw new ComputeLimitExceededException(ComputeLimitExceededException.Limit.STEPS,
+                    "the solve needed more than " + budget.maxSteps() + " steps");
+        }
+        if (stepper.evaluations() > budget.maxEvaluations()) {
+            throw new ComputeLimitExceededException(ComputeLimitExceededException.Limit.EVALUATIONS,
+                    "the solve needed more than " + budget.maxEvaluations() + " evaluations");
+        }
+    }
+
+    /** The segment's knots with the midpoint of every piece between them. */
+    static double[] scanPoints(Segment segment) {
+        double[] knots = segment.knots();
+        double[] scan = new double[2 * knots.length - 1];
+        for (int i = 0; i < knots.length; i++) {
+            scan[2 * i] = knots[i];
+            if (i + 1 < knots.length) {
+                scan[2 * i + 1] = 0.5 * (knots[i] + knots[i + 1]);
+            }
+        }
+        return scan;
+    }
+
+    /**
+     * Cumulative time at or above a temperature within one stage, with the instant at which it
+     * reaches the required hold.
+     */
+    private static final class HoldClock {
+        private final double kelvin;
+        private final double required;
+        private double accumulated;
+        private boolean above;
+
+        HoldClock(double kelvin, double required, double startColdestK) {
+            this.kelvin = kelvin;
+            this.required = required;
+            this.above = startColdestK >= kelvin;
+        }
+
+        boolean isComplete() {
+            return above && required <= 0;
+        }
+
+        /** Walks the scan points; returns the completion time inside them, or NaN. */
+        double advance(DoubleUnaryOperator coldestK, double[] scan) {
+            DoubleUnaryOperator g = t -> coldestK.applyAsDouble(t) - kelvin;
+            for (int i = 0; i + 1 < scan.length; i++) {
+                double p = scan[i];
+                double q = scan[i + 1];
+                boolean aboveAtQ = g.applyAsDouble(q) >= 0;
+                double enter = p;
+                double leave = q;
+                if (!above && aboveAtQ) {
+                    enter = EventLocator.root(g, p, q);
+                } else if (above && !aboveAtQ) {
+                    leave = EventLocator.root(g, p, q);
+                } else if (!above) {
+                    continue;
+                }
+                double completes = enter + (required - accumulated);
+                if (completes <= leave) {
+                    accumulated = required;
+                    return completes;
+                }
+                accumulated += leave - enter;
+                above = aboveAtQ;
+            }
+            return Double.NaN;
+        }
+    }
+
+    /** Per-stage extremes gathered over the segments, kelvin and K/s. */
+    private static final class StageFigures {
+        private final double emissivity;
+        private final StageConditions stage;
+        private final double stageStart;
+        private double peakK;
+        private double lowK;
+        private double largestHr;
+        private double largestRate;
+
+        StageFigures(double emissivity, StageConditions stage, double stageStart, Observation first) {
+            this.emissivity = emissivity;
+            this.stage = stage;
+            this.stageStart = stageStart;
+            this.peakK = first.hottestK();
+            this.lowK = first.coldestK();
+            this.largestHr = hr(stageStart, first);
+        }
+
+        private double hr(double t, Observation o) {
+            return Physics.radiationCoefficient(emissivity, o.surfaceK(), stage.surroundingsK(t - stageStart));
+        }
+
+        void cover(Segment segment, double[] scan, double keptEnd) {
+            int n = 0;
+            while (n < scan.length && scan[n] < keptEnd) {
+                n++;
+            }
+            double[] times = java.util.Arrays.copyOf(scan, n + 1);
+            times[n] = keptEnd;
+            double[] hot = new double[times.length];
+            for (int i = 0; i < times.length; i++) {
+                Observation o = segment.at(times[i]);
+                hot[i] = o.hottestK();
+                largestHr = Math.max(largestHr, hr(times[i], o));
+                lowK = Math.min(lowK, o.coldestK());
+                largestRate = Math.max(largestRate, segment.meanRateAt(times[i]));
+                peakK = Math.max(peakK, hot[i]);
+            }
+            for (int i = 1; i + 1 < times.length; i++) {
+                if (hot[i] >= hot[i - 1] && hot[i] >= hot[i + 1] && hot[i] > Math.min(hot[i - 1], hot[i + 1])) {
+                    // an interior maximum: refine it between the neighbouring scan points
+                    peakK = Math.max(peakK, EventLocator.maximum(t -> segment.at(t).hottestK(),
+                            times[i - 1], times[i + 1]));
+                }
+            }
+        }
+    }
+}
