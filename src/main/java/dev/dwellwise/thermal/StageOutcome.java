@@ -14,9 +14,10 @@ package dev.dwellwise.thermal;
  * @param biotNumber          (h + h_r,max) L/(faces k) for the stage
  * @param steadyK             the temperature the part approaches under the stage's (end) conditions
  * @param holdSecondsAccumulated time the coldest point spent at or above a hold temperature (hold stages; else 0)
+ * @param largestHeatingRate  largest rate of rise of the mass-mean temperature in the stage, K/s
  */
 public record StageOutcome(StageConditions conditions, double startSeconds, double endSeconds, StageEnd ended,
                            Observation start, Observation end, double peakK,
                            double largestRadiationCoefficient, double biotNumber, double steadyK,
-                           double holdSecondsAccumulated) {
+                           double holdSecondsAccumulated, double largestHeatingRate) {
 }

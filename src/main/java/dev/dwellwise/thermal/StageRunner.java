@@ -102,7 +102,7 @@ public final class StageRunner {
         double biot = (stage.convection() + figures.largestHr) * problem.part().characteristicLengthM() / k;
         return new StageOutcome(stage, start, endTime, ended, first, last, figures.peakK, figures.largestHr,
                 biot, SteadyState.of(stage, problem.part().emissivity()),
-                hold == null ? 0 : hold.accumulated);
+                hold == null ? 0 : hold.accumulated, figures.largestRate);
     }
 
     private static boolean alreadyMet(EndCondition end, Observation o) {

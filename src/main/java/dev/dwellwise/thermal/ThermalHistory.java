@@ -34,10 +34,17 @@ public record ThermalHistory(String modelName, List<StageOutcome> stages, Sample
     }
 
     public double largestBiotNumber() {
-        double max = 0;
+        return stageWith(java.util.Comparator.comparingDouble(StageOutcome::biotNumber)).biotNumber();
+    }
+
+    /** The first stage that is largest by the comparator (the stage with the largest Biot number, say). */
+    public StageOutcome stageWith(java.util.Comparator<StageOutcome> largestBy) {
+        StageOutcome best = stages.get(0);
         for (StageOutcome s : stages) {
-            max = Math.max(max, s.biotNumber());
+            if (largestBy.compare(s, best) > 0) {
+                best = s;
+            }
         }
-        return max;
+        return best;
     }
 }

@@ -1,0 +1,90 @@
+package dev.dwellwise;
+
+import dev.dwellwise.http.App;
+import dev.dwellwise.http.ServiceConfig;
+import dev.dwellwise.http.Services;
+import dev.dwellwise.job.InvalidJobException;
+import dev.dwellwise.job.Job;
+import dev.dwellwise.report.SimulationResult;
+import io.javalin.Javalin;
+import java.io.IOException;
+import java.io.PrintStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+/**
+ * The command line: {@code serve [--port N]} starts the service; {@code run JOB.json} prints the
+ * result of one job and exits 0 on a pass verdict, 1 on a fail, 2 when the job is invalid.
+ */
+public final class Main {
+
+    static final int EXIT_PASS = 0;
+    static final int EXIT_FAIL = 1;
+    static final int EXIT_INVALID = 2;
+
+    private Main() {
+    }
+
+    /** Exit code meaning "keep running": the service is serving. */
+    static final int SERVING = -1;
+
+    public static void main(String[] args) {
+        int code = run(args, System.out, System.err);
+        if (code != SERVING) {
+            System.exit(code);
+        }
+    }
+
+    static int run(String[] args, PrintStream out, PrintStream err) {
+        if (args.length == 0 || "serve".equals(args[0])) {
+            return serve(args, err);
+        }
+        if ("run".equals(args[0]) && args.length == 2) {
+            return runJob(Path.of(args[1]), out, err);
+        }
+        err.println("usage: dwellwise serve [--port N] | dwellwise run JOB.json");
+        return EXIT_INVALID;
+    }
+
+    private static int serve(String[] args, PrintStream err) {
+        ServiceConfig config;
+        try {
+            config = ServiceConfig.fromEnvironment(System.getenv());
+            for (int i = 1; i < args.length; i++) {
+                if ("--port".equals(args[i]) && i + 1 < args.length) {
+                    config = config.withPort(Integer.parseInt(args[++i]));
+                } else {
+                    err.println("unknown option " + args[i] + "; usage: dwellwise serve [--port N]");
+                    return EXIT_INVALID;
+                }
+            }
+        } catch (IllegalArgumentException e) {
+            err.println("configuration error: " + e.getMessage());
+            return EXIT_INVALID;
+        }
+        Javalin app = App.create(config, Services.bundled());
+        Runtime.getRuntime().addShutdownHook(new Thread(app::stop, "dwellwise-shutdown"));
+        app.start();
+        return SERVING; // main returns; Jetty's threads keep the JVM alive until a signal stops it
+    }
+
+    private static int runJob(Path file, PrintStream out, PrintStream err) {
+        Services services = Services.bundled();
+        try {
+            byte[] body = Files.readAllBytes(file);
+            Job job = services.mapper().readValue(body, Job.class);
+            SimulationResult result = services.simulator().simulate(job);
+            out.println(services.mapper().writerWithDefaultPrettyPrinter().writeValueAsString(result));
+            return result.passed() ? EXIT_PASS : EXIT_FAIL;
+        } catch (InvalidJobException e) {
+            e.errors().forEach(fe -> err.println(fe.field() + ": " + fe.message()));
+            return EXIT_INVALID;
+        } catch (IOException e) {
+            err.println("cannot read the job: " + e.getMessage());
+            return EXIT_INVALID;
+        } catch (RuntimeException e) {
+            err.println("the job could not be solved: " + e.getMessage());
+            return EXIT_INVALID;
+        }
+    }
+}

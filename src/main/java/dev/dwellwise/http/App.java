@@ -1,0 +1,146 @@
+package dev.dwellwise.http;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import dev.dwellwise.job.FieldError;
+import dev.dwellwise.job.InvalidJobException;
+import dev.dwellwise.thermal.ComputeLimitExceededException;
+import dev.dwellwise.thermal.ModelUnavailableException;
+import io.javalin.Javalin;
+import io.javalin.http.Context;
+import io.javalin.http.HttpResponseException;
+import io.javalin.json.JavalinJackson;
+import java.util.List;
+import java.util.UUID;
+import java.util.regex.Pattern;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+import org.slf4j.MDC;
+
+/**
+ * The app factory: every route, exception mapper and the request logger, declared in one place.
+ * Returns the app unstarted; {@code Main} starts it on the configured port, tests on port 0.
+ */
+public final class App {
+
+    private static final Logger LOG = LoggerFactory.getLogger(App.class);
+    private static final Logger ACCESS = LoggerFactory.getLogger("dwellwise.access");
+    private static final Pattern SAFE_REQUEST_ID = Pattern.compile("[A-Za-z0-9._:-]{1,128}");
+    static final String REQUEST_ID = "X-Request-Id";
+
+    private App() {
+    }
+
+    public static Javalin create(ServiceConfig config, Services services) {
+        Problems problems = new Problems(services.mapper());
+        SimulationRoutes simulations = new SimulationRoutes(services, new JsonBodies(services.mapper()), config);
+        LibraryRoutes library = new LibraryRoutes(services);
+        return Javalin.create(cfg -> {
+            cfg.startup.showJavalinBanner = false;
+            cfg.startup.showOldJavalinVersionWarning = false;
+            cfg.http.maxRequestSize = config.maxBodyBytes();
+            cfg.http.defaultContentType = MediaTypes.JSON;
+            cfg.http.prefer405over404 = true;
+            cfg.jetty.host = config.host();
+            cfg.jetty.port = config.port();
+            cfg.jsonMapper(new JavalinJackson(services.mapper(), false));
+            cfg.requestLogger.http((ctx, ms) -> {
+                ACCESS.info("{} {} {} {}ms", ctx.method(), route(ctx), ctx.statusCode(), Math.round(ms));
+                MDC.remove("requestId");
+            });
+
+            cfg.routes.before(ctx -> {
+                String given = ctx.header(REQUEST_ID);
+                String id = given != null && SAFE_REQUEST_ID.matcher(given).matches() ? given
+                        : UUID.randomUUID().toString();
+                ctx.attribute("requestId", id);
+                ctx.header(REQUEST_ID, id);
+                MDC.put("requestId", id);
+            });
+
+            cfg.routes.get("/health/live", ctx -> ctx.json(new Health("up")));
+            cfg.routes.get("/health/ready", ctx -> ctx.json(new Health("ready")));
+            cfg.routes.get("/openapi.yaml", ctx -> ctx.contentType(MediaTypes.YAML).result(services.openApi()));
+            cfg.routes.get("/v1/materials", library::materials);
+            cfg.routes.get("/v1/materials/{id}", library::material);
+            cfg.routes.get("/v1/examples", library::examples);
+            cfg.routes.get("/v1/examples/{id}", library::example);
+            cfg.routes.post("/v1/simulations", simulations::simulate);
+
+            cfg.routes.exception(ApiException.class, (e, ctx) -> problems.write(ctx, e.type(), e.getMessage(),
+                    e.errors()));
+            cfg.routes.exception(InvalidJobException.class, (e, ctx) -> problems.write(ctx, ProblemType.INVALID_JOB,
+                    summary(e.errors()), e.errors()));
+            cfg.routes.exception(ModelUnavailableException.class, (e, ctx) -> problems.write(ctx,
+                    ProblemType.INVALID_JOB, e.getMessage(), List.of(new FieldError(modelField(ctx), e.getMessage()))));
+            cfg.routes.exception(ComputeLimitExceededException.class, (e, ctx) -> problems.write(ctx,
+                    ProblemType.COMPUTE_LIMIT, e.getMessage(), List.of(new FieldError(limitField(ctx, e),
+                            e.getMessage() + (e.limit() == ComputeLimitExceededException.Limit.SAMPLES
+                                    ? "; raise output.sampleSeconds or set output.series to false"
+                                    : "; shorten the stages or give them smaller maxSeconds")))));
+            cfg.routes.exception(HttpResponseException.class, (e, ctx) -> problems.write(ctx,
+                    fromStatus(e.getStatus()), e.getMessage(), List.of()));
+            cfg.routes.exception(JsonProcessingException.class, (e, ctx) -> problems.write(ctx,
+                    ProblemType.UNREADABLE_BODY, "malformed JSON", List.of()));
+            cfg.routes.exception(Exception.class, (e, ctx) -> {
+                LOG.error("unhandled error on {} {}", ctx.method(), ctx.path(), e);
+                problems.write(ctx, ProblemType.INTERNAL, "an internal error occurred; quote the request id "
+                        + "to the service's operators", List.of());
+            });
+            cfg.routes.error(404, ctx -> {
+                if (!problems.written(ctx)) {
+                    problems.write(ctx, ProblemType.NOT_FOUND, "no resource at " + ctx.path(), List.of());
+                }
+            });
+            cfg.routes.error(405, ctx -> {
+                if (!problems.written(ctx)) {
+                    problems.write(ctx, ProblemType.METHOD_NOT_ALLOWED, ctx.method() + " is not allowed on "
+                            + ctx.path(), List.of());
+                }
+            });
+        });
+    }
+
+    /** The matched route template ({@code /v1/materials/{id}}), or the raw path where none matched. */
+    static String route(Context ctx) {
+        try {
+            io.javalin.router.Endpoint endpoint = ctx.endpoint();
+            return endpoint == null ? ctx.path() : endpoint.path;
+        } catch (RuntimeException e) {
+            return ctx.path();
+        }
+    }
+
+    private static String summary(List<FieldError> errors) {
+        FieldError first = errors.get(0);
+        return first.field() + ": " + first.message()
+                + (errors.size() > 1 ? " (and " + (errors.size() - 1) + " more)" : "");
+    }
+
+    /** The JSON path of the job in this request: the job is the body, or nested under {@code job}. */
+    private static String jobPrefix(Context ctx) {
+        String prefix = ctx.attribute(SimulationRoutes.JOB_PREFIX);
+        return prefix == null ? "" : prefix;
+    }
+
+    private static String modelField(Context ctx) {
+        return jobPrefix(ctx) + "model";
+    }
+
+    private static String limitField(Context ctx, ComputeLimitExceededException e) {
+        return jobPrefix(ctx) + (e.limit() == ComputeLimitExceededException.Limit.SAMPLES
+                ? "output.sampleSeconds" : "stages");
+    }
+
+    private static ProblemType fromStatus(int status) {
+        for (ProblemType type : ProblemType.values()) {
+            if (type.status() == status) {
+                return type;
+            }
+        }
+        return status >= 500 ? ProblemType.INTERNAL : ProblemType.UNREADABLE_BODY;
+    }
+
+    /** The body of the health probes. */
+    public record Health(String status) {
+    }
+}
