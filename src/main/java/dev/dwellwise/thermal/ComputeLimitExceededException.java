@@ -4,7 +4,7 @@ package dev.dwellwise.thermal;
 public final class ComputeLimitExceededException extends RuntimeException {
 
     /** Which limit was reached. */
-    public enum Limit { STEPS, EVALUATIONS, SAMPLES }
+    public enum Limit { STEPS, EVALUATIONS, SAMPLES, TIME }
 
     private final Limit limit;
 
