@@ -18,6 +18,7 @@ final class LumpedStepper implements Stepper {
 
     private final ThermalPart part;
     private final ComputeBudget budget;
+    private final Deadline deadline;
     private final DormandPrince853Integrator integrator;
     private final double faces;
     private StageConditions stage;
@@ -32,6 +33,7 @@ final class LumpedStepper implements Stepper {
     LumpedStepper(ThermalPart part, ComputeBudget budget) {
         this.part = part;
         this.budget = budget;
+        this.deadline = Deadline.startingNow(budget);
         this.faces = part.exposedFaces();
         this.integrator = new DormandPrince853Integrator(1e-9, 1e7,
                 LumpedModel.ABSOLUTE_TOLERANCE, LumpedModel.RELATIVE_TOLERANCE);
@@ -76,6 +78,7 @@ final class LumpedStepper implements Stepper {
 
             @Override
             public void handleStep(StepInterpolator interpolator, boolean isLast) {
+                deadline.check(); // a window can hold thousands of steps: stop inside it
                 pieces.add(interpolator.copy());
             }
         });

@@ -25,8 +25,7 @@ public final class StageRunner {
     private final DenseHistory dense = new DenseHistory();
     private final List<Profile> profiles = new ArrayList<>();
     private final List<Double> pendingProfiles;
-    /** System.nanoTime() past which the run stops: the budget's wall-clock limit from the start. */
-    private final long deadlineNanos;
+    private final Deadline deadline;
     private double largestRate = 0;
     private double peakK;
 
@@ -37,7 +36,7 @@ public final class StageRunner {
         this.pendingProfiles = new ArrayList<>(problem.profileTimes());
         this.pendingProfiles.sort(Double::compare);
         this.peakK = problem.part().initialK();
-        this.deadlineNanos = System.nanoTime() + problem.budget().maxMillis() * 1_000_000;
+        this.deadline = Deadline.startingNow(problem.budget());
     }
 
     /** Computes the history of the problem with the model. */
@@ -166,10 +165,7 @@ public final class StageRunner {
             throw new ComputeLimitExceededException(ComputeLimitExceededException.Limit.EVALUATIONS,
                     "the solve needed more than " + budget.maxEvaluations() + " evaluations");
         }
-        if (System.nanoTime() - deadlineNanos >= 0) {
-            throw new ComputeLimitExceededException(ComputeLimitExceededException.Limit.TIME,
-                    "the solve ran longer than its budget of " + budget.maxMillis() + " ms");
-        }
+        deadline.check();
     }
 
     /** The segment's knots with the midpoint of every piece between them. */

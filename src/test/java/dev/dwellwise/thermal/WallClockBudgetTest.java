@@ -24,6 +24,16 @@ class WallClockBudgetTest {
     }
 
     @Test
+    void theLumpedStepperStopsInsideAWindowWithoutWaitingForItsEnd() {
+        ThermalProblem problem = heating(ComputeBudget.standard().withMaxMillis(0));
+        Stepper stepper = new LumpedModel().newStepper(problem.part(), problem.budget());
+        stepper.enterStage(problem.stages().get(0));
+        ComputeLimitExceededException e = assertThrows(ComputeLimitExceededException.class,
+                () -> stepper.advance(3600));
+        assertEquals(ComputeLimitExceededException.Limit.TIME, e.limit());
+    }
+
+    @Test
     void theSameRunWithTheStandardBudgetCompletes() {
         ThermalHistory history = StageRunner.run(heating(ComputeBudget.standard()), new LumpedModel());
         assertEquals(StageEnd.REACHED, history.stages().get(0).ended());
