@@ -169,11 +169,20 @@ final class LumpedStepper implements Stepper {
         }
 
         private double temperatureAt(double time) {
-            int i = 0;
-            while (i < pieces.size() - 1 && time > knots[i + 1]) {
-                i++;
+            // The first piece that ends at or after the time (the last one past the end). Binary
+            // search: a stiff stage can put a hundred thousand steps in one segment, and the runner
+            // reads the segment at every knot, so a linear scan would make the solve quadratic.
+            int lo = 0;
+            int hi = pieces.size() - 1;
+            while (lo < hi) {
+                int mid = (lo + hi) >>> 1;
+                if (knots[mid + 1] >= time) {
+                    hi = mid;
+                } else {
+                    lo = mid + 1;
+                }
             }
-            StepInterpolator piece = pieces.get(i);
+            StepInterpolator piece = pieces.get(lo);
             piece.setInterpolatedTime(time);
             return piece.getInterpolatedState()[0];
         }
