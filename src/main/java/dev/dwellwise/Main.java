@@ -7,16 +7,25 @@ import dev.dwellwise.job.InvalidJobException;
 import dev.dwellwise.job.Job;
 import dev.dwellwise.report.SimulationResult;
 import io.javalin.Javalin;
+import java.util.List;
 import java.io.IOException;
 import java.io.PrintStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
 
 /**
  * The command line: {@code serve [--port N]} starts the service; {@code run JOB.json} prints the
  * result of one job and exits 0 on a pass verdict, 1 on a fail, 2 when the job is invalid.
+ *
+ * <p>{@code serve} exits 2 on a configuration error and 1 when the server cannot start. Once it
+ * serves, SIGTERM (or SIGINT) runs the shutdown hook: a graceful stop of the app, then exit 0 when
+ * every request in flight finished within the grace period, 1 when the stop failed.
  */
 public final class Main {
+
+    private static final Logger LOG = LoggerFactory.getLogger(Main.class);
 
     static final int EXIT_PASS = 0;
     static final int EXIT_FAIL = 1;
@@ -62,10 +71,39 @@ public final class Main {
             err.println("configuration error: " + e.getMessage());
             return EXIT_INVALID;
         }
-        Javalin app = App.create(config, Services.bundled());
-        Runtime.getRuntime().addShutdownHook(new Thread(app::stop, "dwellwise-shutdown"));
-        app.start();
+        List<String> unknown = ServiceConfig.unrecognised(System.getenv());
+        if (!unknown.isEmpty()) {
+            LOG.warn("ignoring unknown settings {}; the service reads {}", unknown, ServiceConfig.VARIABLES);
+        }
+        Javalin app = App.create(config, Services.bundled(config));
+        try {
+            app.start();
+        } catch (RuntimeException e) {
+            err.println("cannot start the server: " + e.getMessage());
+            return EXIT_FAIL;
+        }
+        LOG.info("serving on port {}: {}", app.port(), config);
+        // The JVM would exit 143 after a SIGTERM; halting from the hook makes the code say whether
+        // the stop was clean. No other hook is registered, so halting cuts nothing short.
+        Runtime.getRuntime().addShutdownHook(new Thread(() -> Runtime.getRuntime().halt(stop(app)),
+                "dwellwise-shutdown"));
         return SERVING; // main returns; Jetty's threads keep the JVM alive until a signal stops it
+    }
+
+    /** The shutdown hook's work: the graceful stop; the exit code it earns. */
+    static int stop(Javalin app) {
+        LOG.info("stopping: no new connections; waiting for the requests in flight");
+        try {
+            app.stop();
+            LOG.info("stopped");
+            return EXIT_PASS;
+        } catch (RuntimeException e) {
+            LOG.error("the stop did not complete cleanly: {}", e.getMessage());
+            return EXIT_FAIL;
+        } finally {
+            System.out.flush();
+            System.err.flush();
+        }
     }
 
     private static int runJob(Path file, PrintStream out, PrintStream err) {

@@ -7,33 +7,46 @@ import dev.dwellwise.thermal.ComputeLimitExceededException;
 import dev.dwellwise.thermal.ModelUnavailableException;
 import io.javalin.Javalin;
 import io.javalin.http.Context;
+import io.javalin.http.HandlerType;
 import io.javalin.http.HttpResponseException;
 import io.javalin.json.JavalinJackson;
+import java.io.IOException;
 import java.util.List;
-import java.util.UUID;
-import java.util.regex.Pattern;
+import org.eclipse.jetty.util.thread.QueuedThreadPool;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
-import org.slf4j.MDC;
 
 /**
- * The app factory: every route, exception mapper and the request logger, declared in one place.
- * Returns the app unstarted; {@code Main} starts it on the configured port, tests on port 0.
+ * The app factory: every route, exception mapper, the request logger and the server settings,
+ * declared in one place. Returns the app unstarted; {@code Main} starts it on the configured port,
+ * tests on port 0. Its {@code stop()} is graceful: it stops accepting, lets the requests in flight
+ * finish within the configured grace period, then stops.
+ *
+ * <p>Every request passes, in order: a request id, the security headers, CORS (which answers
+ * OPTIONS itself), routing, the bearer token; the request logger writes the access line, records
+ * the request's metrics and clears the id.
  */
 public final class App {
 
     private static final Logger LOG = LoggerFactory.getLogger(App.class);
     private static final Logger ACCESS = LoggerFactory.getLogger("dwellwise.access");
-    private static final Pattern SAFE_REQUEST_ID = Pattern.compile("[A-Za-z0-9._:-]{1,128}");
-    static final String REQUEST_ID = "X-Request-Id";
 
     private App() {
     }
 
     public static Javalin create(ServiceConfig config, Services services) {
+        QueuedThreadPool httpThreads = HttpServerSettings.threadPool(config);
+        ServiceMetrics metrics = new ServiceMetrics(httpThreads);
+        ProblemErrorHandler jettyErrors = new ProblemErrorHandler(services.mapper(), metrics);
         Problems problems = new Problems(services.mapper());
-        SimulationRoutes simulations = new SimulationRoutes(services, new JsonBodies(services.mapper()), config);
+        AdmissionControl admission = new AdmissionControl(config.workerThreads(), config.queueSize(),
+                config.computeBudgetMillis(), metrics.registry());
+        Solver solver = new Solver(services.simulator(), admission, metrics.registry());
+        SimulationRoutes simulations = new SimulationRoutes(services, solver, new JsonBodies(services.mapper()),
+                config);
         LibraryRoutes library = new LibraryRoutes(services);
+        CorsPolicy cors = new CorsPolicy(config.corsOrigins());
+        BearerAuth auth = new BearerAuth(config.apiToken());
         return Javalin.create(cfg -> {
             cfg.startup.showJavalinBanner = false;
             cfg.startup.showOldJavalinVersionWarning = false;
@@ -42,23 +55,40 @@ public final class App {
             cfg.http.prefer405over404 = true;
             cfg.jetty.host = config.host();
             cfg.jetty.port = config.port();
+            cfg.jetty.threadPool = httpThreads;
+            cfg.jetty.modifyServer(server -> HttpServerSettings.configure(server, config, jettyErrors));
+            cfg.jetty.modifyHttpConfiguration(HttpServerSettings::configure);
+            cfg.jetty.modifyServletContextHandler(context -> context.setErrorHandler(jettyErrors));
+            cfg.events.serverStopped(metrics::close);
             cfg.jsonMapper(new JavalinJackson(services.mapper(), false));
             cfg.requestLogger.http((ctx, ms) -> {
-                ACCESS.info("{} {} {} {}ms", ctx.method(), route(ctx), ctx.statusCode(), Math.round(ms));
-                MDC.remove("requestId");
+                try {
+                    String route = route(ctx);
+                    ACCESS.info("{} {} {} {}ms", ctx.method(), route == null ? ctx.path() : route, ctx.statusCode(),
+                            Math.round(ms));
+                    metrics.recordRequest(ctx.method().name(), route == null ? ServiceMetrics.UNMATCHED : route,
+                            ctx.statusCode(), ms);
+                } finally {
+                    RequestIds.clear();
+                }
             });
 
             cfg.routes.before(ctx -> {
-                String given = ctx.header(REQUEST_ID);
-                String id = given != null && SAFE_REQUEST_ID.matcher(given).matches() ? given
-                        : UUID.randomUUID().toString();
-                ctx.attribute("requestId", id);
-                ctx.header(REQUEST_ID, id);
-                MDC.put("requestId", id);
+                RequestIds.assign(ctx);
+                SecurityHeaders.apply(ctx::header);
+                cors.apply(ctx);
+                if (ctx.method() == HandlerType.OPTIONS) {
+                    cors.options(ctx);
+                    ctx.skipRemainingHandlers();
+                }
             });
+            // After routing, so a refusal is counted under its route; a path with no route gets its
+            // 404 without a token, which tells nothing that the contract does not.
+            cfg.routes.beforeMatched(auth::check);
 
             cfg.routes.get("/health/live", ctx -> ctx.json(new Health("up")));
             cfg.routes.get("/health/ready", ctx -> ctx.json(new Health("ready")));
+            cfg.routes.get("/metrics", ctx -> ctx.contentType(ServiceMetrics.CONTENT_TYPE).result(metrics.scrape()));
             cfg.routes.get("/openapi.yaml", ctx -> ctx.contentType(MediaTypes.YAML).result(services.openApi()));
             cfg.routes.get("/v1/materials", library::materials);
             cfg.routes.get("/v1/materials/{id}", library::material);
@@ -79,6 +109,11 @@ public final class App {
                                     : "; shorten the stages or give them smaller maxSeconds")))));
             cfg.routes.exception(HttpResponseException.class, (e, ctx) -> problems.write(ctx,
                     fromStatus(e.getStatus()), e.getMessage(), List.of()));
+            // Reading the body failed under the handler: the connection ended early or the chunked
+            // framing was broken. The client's fault, and nothing for an operator to look at.
+            cfg.routes.exception(IOException.class, (e, ctx) -> problems.write(ctx, ProblemType.UNREADABLE_BODY,
+                    "the request body could not be read: the connection ended early or its framing is broken",
+                    List.of()));
             cfg.routes.exception(JsonProcessingException.class, (e, ctx) -> problems.write(ctx,
                     ProblemType.UNREADABLE_BODY, "malformed JSON", List.of()));
             cfg.routes.exception(Exception.class, (e, ctx) -> {
@@ -100,13 +135,13 @@ public final class App {
         });
     }
 
-    /** The matched route template ({@code /v1/materials/{id}}), or the raw path where none matched. */
+    /** The matched route template ({@code /v1/materials/{id}}), or null where none matched. */
     static String route(Context ctx) {
         try {
-            io.javalin.router.Endpoint endpoint = ctx.endpoint();
-            return endpoint == null ? ctx.path() : endpoint.path;
+            io.javalin.router.Endpoint endpoint = ctx.endpoints().matchedHttpEndpoint();
+            return endpoint == null ? null : endpoint.path;
         } catch (RuntimeException e) {
-            return ctx.path();
+            return null;
         }
     }
 

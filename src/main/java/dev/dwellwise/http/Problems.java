@@ -10,6 +10,8 @@ import java.util.List;
 final class Problems {
 
     private static final String WRITTEN = "dwellwise.problemWritten";
+    /** Seconds a client should wait after a 503: long enough for a solve slot to come free. */
+    static final String RETRY_AFTER_SECONDS = "1";
 
     private final ObjectMapper mapper;
 
@@ -19,7 +21,10 @@ final class Problems {
 
     void write(Context ctx, ProblemType type, String detail, List<FieldError> errors) {
         Problem problem = new Problem(type.uri(), type.title(), type.status(), detail, ctx.path(),
-                errors.isEmpty() ? null : errors, ctx.attribute("requestId"));
+                errors.isEmpty() ? null : errors, ctx.attribute(RequestIds.ATTRIBUTE));
+        if (type.status() == 503) {
+            ctx.header("Retry-After", RETRY_AFTER_SECONDS);
+        }
         try {
             ctx.status(type.status()).contentType(MediaTypes.PROBLEM_JSON).result(mapper.writeValueAsBytes(problem));
         } catch (JsonProcessingException e) {

@@ -23,12 +23,19 @@ public record Services(Simulator simulator, MaterialLibrary materials, ExampleLi
         openApi = openApi.clone();
     }
 
+    /** The bundled libraries with the default compute budget. */
     public static Services bundled() {
+        return bundled(ServiceConfig.defaults());
+    }
+
+    /** The bundled libraries, the solver's wall-clock budget from the configuration. */
+    public static Services bundled(ServiceConfig config) {
         ObjectMapper mapper = WireJson.create();
         MaterialLibrary materials = MaterialLibrary.bundled();
         String version = readVersion();
         ModelSelector selector = new ModelSelector(new LumpedModel(), Optional.empty());
-        Simulator simulator = new Simulator(materials, selector, JobLimits.standard(), ComputeBudget.standard(),
+        ComputeBudget budget = ComputeBudget.standard().withMaxMillis(config.computeBudgetMillis());
+        Simulator simulator = new Simulator(materials, selector, JobLimits.standard(), budget,
                 "dwellwise " + version);
         return new Services(simulator, materials, ExampleLibrary.bundled(mapper), mapper, version,
                 resource("/openapi/dwellwise.yaml"));

@@ -17,11 +17,13 @@ final class SimulationRoutes {
     private static final List<String> OFFERED = List.of(MediaTypes.JSON, MediaTypes.CSV);
 
     private final Services services;
+    private final Solver solver;
     private final JsonBodies bodies;
     private final ServiceConfig config;
 
-    SimulationRoutes(Services services, JsonBodies bodies, ServiceConfig config) {
+    SimulationRoutes(Services services, Solver solver, JsonBodies bodies, ServiceConfig config) {
         this.services = services;
+        this.solver = solver;
         this.bodies = bodies;
         this.config = config;
     }
@@ -29,7 +31,7 @@ final class SimulationRoutes {
     void simulate(Context ctx) throws JsonProcessingException {
         String produce = negotiate(ctx, OFFERED);
         Job job = bodies.read(body(ctx, config), Job.class);
-        SimulationResult result = services.simulator().simulate(job);
+        SimulationResult result = solver.simulate(job, "");
         if (MediaTypes.CSV.equals(produce)) {
             if (result.series() == null) {
                 throw new ApiException(ProblemType.NOT_ACCEPTABLE, "text/csv carries the series, and the job "
@@ -58,7 +60,8 @@ final class SimulationRoutes {
             throw new ApiException(ProblemType.UNSUPPORTED_MEDIA_TYPE, "send the job as application/json, not "
                     + (ctx.contentType() == null ? "a body without a Content-Type" : ctx.contentType()));
         }
-        long length = ctx.contentLength();
+        // The long form: Context.contentLength() is an int, -1 for a declared length past 2 GiB.
+        long length = ctx.req().getContentLengthLong();
         if (length > config.maxBodyBytes()) {
             throw tooLarge(config);
         }

@@ -1,0 +1,84 @@
+package dev.dwellwise.http;
+
+import io.micrometer.core.instrument.Counter;
+import io.micrometer.core.instrument.Gauge;
+import io.micrometer.core.instrument.MeterRegistry;
+import io.micrometer.core.instrument.Timer;
+import java.util.concurrent.Semaphore;
+import java.util.concurrent.TimeUnit;
+import java.util.function.Supplier;
+
+/**
+ * Bounds the solves in progress: at most {@code workers} compute at once and at most {@code queue}
+ * more wait for a worker, in arrival order. A solve beyond that is refused at once with 503 rather
+ * than piling up behind the others; so is one that waited a whole compute budget without getting
+ * a worker. Solves run on the request's own thread: the HTTP thread pool is sized to hold every
+ * admitted solve plus headroom, so probes and scrapes are answered while the solvers are full.
+ */
+final class AdmissionControl {
+
+    private final int workers;
+    private final int queue;
+    private final long maxWaitMillis;
+    /** Workers plus queue places: one is held from arrival to the end of the solve. */
+    private final Semaphore admitted;
+    /** Workers: one is held while computing. Fair, so waiting solves start in arrival order. */
+    private final Semaphore computing;
+    private final Counter rejected;
+    private final Timer waited;
+
+    AdmissionControl(int workers, int queue, long maxWaitMillis, MeterRegistry registry) {
+        this.workers = workers;
+        this.queue = queue;
+        this.maxWaitMillis = maxWaitMillis;
+        this.admitted = new Semaphore(workers + queue);
+        this.computing = new Semaphore(workers, true);
+        this.rejected = Counter.builder("dwellwise.admission.rejected")
+                .description("Solves refused with 503 because every worker and queue place was taken")
+                .register(registry);
+        this.waited = Timer.builder("dwellwise.admission.wait")
+                .description("Time admitted solves waited for a worker")
+                .register(registry);
+        Gauge.builder("dwellwise.solves.active", this, AdmissionControl::active)
+                .description("Solves computing now").register(registry);
+        Gauge.builder("dwellwise.solves.waiting", this, AdmissionControl::waiting)
+                .description("Solves waiting for a worker").register(registry);
+    }
+
+    /** Runs the solve when a worker is free; throws a 503 problem when the service is at capacity. */
+    <T> T run(Supplier<T> solve) {
+        if (!admitted.tryAcquire()) {
+            throw overloaded("all " + workers + " workers are busy and all " + queue + " queue places are taken");
+        }
+        try {
+            long start = System.nanoTime();
+            if (!computing.tryAcquire(maxWaitMillis, TimeUnit.MILLISECONDS)) {
+                throw overloaded("no worker came free within " + maxWaitMillis + " ms");
+            }
+            waited.record(System.nanoTime() - start, TimeUnit.NANOSECONDS);
+            try {
+                return solve.get();
+            } finally {
+                computing.release();
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw overloaded("the service is stopping");
+        } finally {
+            admitted.release();
+        }
+    }
+
+    int active() {
+        return workers - computing.availablePermits();
+    }
+
+    int waiting() {
+        return Math.max(0, workers + queue - admitted.availablePermits() - active());
+    }
+
+    private ApiException overloaded(String why) {
+        rejected.increment();
+        return new ApiException(ProblemType.OVERLOADED, why + "; retry shortly");
+    }
+}

@@ -1,0 +1,53 @@
+package dev.dwellwise.http;
+
+import io.javalin.http.Context;
+import io.javalin.http.HandlerType;
+import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.Optional;
+import java.util.Set;
+
+/**
+ * The optional bearer token (RFC 6750). When configured, every request needs
+ * {@code Authorization: Bearer <token>} except the probes and the metrics scrape (the orchestrator
+ * and Prometheus carry no token, and neither answer holds plant data) and OPTIONS (browsers send
+ * preflights without credentials). A refusal is a 401 problem with {@code WWW-Authenticate}.
+ */
+final class BearerAuth {
+
+    static final Set<String> OPEN_PATHS = Set.of("/health/live", "/health/ready", "/metrics");
+    private static final String CHALLENGE = "Bearer realm=\"dwellwise\"";
+
+    /** SHA-256 of the token: comparing digests takes the same time whatever the given token's length. */
+    private final Optional<byte[]> expectedDigest;
+
+    BearerAuth(Optional<String> token) {
+        this.expectedDigest = token.map(BearerAuth::digest);
+    }
+
+    /** Before every request: refuses it unless authentication is off, the path is open, or the token matches. */
+    void check(Context ctx) {
+        if (expectedDigest.isEmpty() || ctx.method() == HandlerType.OPTIONS || OPEN_PATHS.contains(ctx.path())) {
+            return;
+        }
+        String header = ctx.header("Authorization");
+        if (header == null || !header.regionMatches(true, 0, "Bearer ", 0, 7)) {
+            ctx.header("WWW-Authenticate", CHALLENGE);
+            throw new ApiException(ProblemType.UNAUTHORIZED, "send the service's token as Authorization: Bearer <token>");
+        }
+        byte[] given = digest(header.substring(7).trim());
+        if (!MessageDigest.isEqual(expectedDigest.get(), given)) {
+            ctx.header("WWW-Authenticate", CHALLENGE + ", error=\"invalid_token\"");
+            throw new ApiException(ProblemType.UNAUTHORIZED, "the bearer token is not valid");
+        }
+    }
+
+    private static byte[] digest(String token) {
+        try {
+            return MessageDigest.getInstance("SHA-256").digest(token.getBytes(StandardCharsets.UTF_8));
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("every JVM has SHA-256", e);
+        }
+    }
+}

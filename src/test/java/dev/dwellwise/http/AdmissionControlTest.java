@@ -1,0 +1,93 @@
+package dev.dwellwise.http;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import io.micrometer.core.instrument.simple.SimpleMeterRegistry;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.TimeUnit;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.Timeout;
+
+@Timeout(20)
+class AdmissionControlTest {
+
+    private final SimpleMeterRegistry registry = new SimpleMeterRegistry();
+    private final ExecutorService callers = Executors.newFixedThreadPool(2);
+    private final CountDownLatch release = new CountDownLatch(1);
+
+    @AfterEach
+    void stopCallers() {
+        release.countDown();
+        callers.shutdownNow();
+    }
+
+    @Test
+    void aSolveWaitsInTheQueueWhileTheWorkerIsBusyAndTheOneAfterItIsRefused() throws Exception {
+        AdmissionControl admission = new AdmissionControl(1, 1, 5_000, registry);
+        CountDownLatch computing = new CountDownLatch(1);
+        Future<String> first = callers.submit(() -> admission.run(() -> {
+            computing.countDown();
+            await(release);
+            return "first";
+        }));
+        assertTrue(computing.await(5, TimeUnit.SECONDS));
+        Future<String> second = callers.submit(() -> admission.run(() -> "second"));
+        awaitWaiting(admission, 1);
+
+        ApiException refused = assertThrows(ApiException.class, () -> admission.run(() -> "third"));
+        assertEquals(ProblemType.OVERLOADED, refused.type());
+        assertEquals(1.0, registry.get("dwellwise.admission.rejected").counter().count());
+
+        release.countDown();
+        assertEquals("first", first.get(5, TimeUnit.SECONDS));
+        assertEquals("second", second.get(5, TimeUnit.SECONDS));
+        assertEquals(0, admission.active());
+        assertEquals(0, admission.waiting());
+    }
+
+    @Test
+    void aQueuedSolveThatGetsNoWorkerWithinTheWaitLimitIsRefused() throws Exception {
+        AdmissionControl admission = new AdmissionControl(1, 1, 50, registry);
+        CountDownLatch computing = new CountDownLatch(1);
+        callers.submit(() -> admission.run(() -> {
+            computing.countDown();
+            await(release);
+            return "held";
+        }));
+        assertTrue(computing.await(5, TimeUnit.SECONDS));
+        ApiException refused = assertThrows(ApiException.class, () -> admission.run(() -> "late"));
+        assertEquals(ProblemType.OVERLOADED, refused.type());
+    }
+
+    @Test
+    void aFailingSolveGivesItsPlacesBack() {
+        AdmissionControl admission = new AdmissionControl(1, 0, 1_000, registry);
+        assertThrows(IllegalStateException.class, () -> admission.run(() -> {
+            throw new IllegalStateException("solver failed");
+        }));
+        assertEquals("next", admission.run(() -> "next"));
+    }
+
+    /** Polls the gauge the metrics show until the expected number of solves wait (bounded). */
+    private static void awaitWaiting(AdmissionControl admission, int expected) throws InterruptedException {
+        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(5);
+        while (admission.waiting() != expected) {
+            assertTrue(System.nanoTime() < deadline, "waiting solves: " + admission.waiting());
+            Thread.sleep(5);
+        }
+    }
+
+    private static void await(CountDownLatch latch) {
+        try {
+            assertTrue(latch.await(5, TimeUnit.SECONDS));
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+    }
+}

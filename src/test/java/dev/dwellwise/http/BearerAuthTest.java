@@ -1,0 +1,76 @@
+package dev.dwellwise.http;
+
+import static org.hamcrest.Matchers.equalTo;
+import static org.hamcrest.Matchers.startsWith;
+
+import java.util.Map;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.Timeout;
+
+@Timeout(20)
+class BearerAuthTest {
+
+    private static final String TOKEN = "line-3-mes-token-0123456789";
+    private static RunningService secured;
+    private static RunningService open;
+
+    @BeforeAll
+    static void start() {
+        secured = RunningService.start(Map.of(ServiceConfig.API_TOKEN, TOKEN));
+        open = RunningService.start(Map.of());
+    }
+
+    @AfterAll
+    static void stop() {
+        secured.close();
+        open.close();
+    }
+
+    @Test
+    void withoutAConfiguredTokenTheApiAnswersWithoutCredentials() {
+        Http.given(open).get("/v1/materials").then().statusCode(200);
+    }
+
+    @Test
+    void withATokenConfiguredARequestWithoutOneGets401ProblemDetailsWithABearerChallenge() {
+        Http.given(secured).get("/v1/materials").then()
+                .statusCode(401)
+                .contentType("application/problem+json")
+                .header("WWW-Authenticate", startsWith("Bearer"))
+                .body("type", equalTo(ProblemType.UNAUTHORIZED.uri()))
+                .body("status", equalTo(401));
+    }
+
+    @Test
+    void aWrongTokenGets401NamingTheInvalidToken() {
+        Http.given(secured).header("Authorization", "Bearer " + TOKEN + "x").get("/v1/materials").then()
+                .statusCode(401)
+                .header("WWW-Authenticate", equalTo("Bearer realm=\"dwellwise\", error=\"invalid_token\""))
+                .body("type", equalTo(ProblemType.UNAUTHORIZED.uri()));
+    }
+
+    @Test
+    void anotherSchemeThanBearerGets401() {
+        Http.given(secured).header("Authorization", "Basic " + TOKEN).get("/v1/materials").then().statusCode(401);
+    }
+
+    @Test
+    void theRightTokenIsLetThroughWhateverTheCaseOfTheScheme() {
+        Http.given(secured).header("Authorization", "bearer " + TOKEN).get("/v1/materials").then().statusCode(200);
+    }
+
+    @Test
+    void aPostIsRefusedBeforeItsBodyIsSolved() {
+        Http.given(secured).contentType("application/json").body(Jobs.PANEL).post("/v1/simulations").then()
+                .statusCode(401);
+    }
+
+    @Test
+    void theProbesAndTheMetricsStayOpenWithoutAToken() {
+        Http.given(secured).get("/health/live").then().statusCode(200);
+        Http.given(secured).get("/health/ready").then().statusCode(200);
+        Http.given(secured).get("/metrics").then().statusCode(200);
+    }
+}

@@ -1,0 +1,53 @@
+package dev.dwellwise.http;
+
+import ch.qos.logback.classic.Level;
+import ch.qos.logback.classic.Logger;
+import ch.qos.logback.classic.spi.ILoggingEvent;
+import ch.qos.logback.core.AppenderBase;
+import java.util.List;
+import java.util.concurrent.ConcurrentLinkedQueue;
+import org.slf4j.LoggerFactory;
+
+/** Records what one logger writes (at INFO and above) while a test runs, with each event's MDC. */
+final class CapturedLog extends AppenderBase<ILoggingEvent> implements AutoCloseable {
+
+    private final ConcurrentLinkedQueue<ILoggingEvent> events = new ConcurrentLinkedQueue<>();
+    private final Logger logger;
+    private final Level previous;
+
+    private CapturedLog(String name) {
+        this.logger = (Logger) LoggerFactory.getLogger(name);
+        this.previous = logger.getLevel();
+    }
+
+    static CapturedLog of(String name) {
+        CapturedLog log = new CapturedLog(name);
+        log.setContext(log.logger.getLoggerContext());
+        log.start();
+        log.logger.setLevel(Level.INFO);
+        log.logger.addAppender(log);
+        return log;
+    }
+
+    @Override
+    protected void append(ILoggingEvent event) {
+        event.prepareForDeferredProcessing();
+        events.add(event);
+    }
+
+    /** The request ids in the MDC of the events logged so far, in order. */
+    List<String> requestIds() {
+        return events.stream().map(e -> e.getMDCPropertyMap().get(RequestIds.MDC_KEY)).toList();
+    }
+
+    List<String> messages() {
+        return events.stream().map(ILoggingEvent::getFormattedMessage).toList();
+    }
+
+    @Override
+    public void close() {
+        logger.detachAppender(this);
+        logger.setLevel(previous);
+        stop();
+    }
+}

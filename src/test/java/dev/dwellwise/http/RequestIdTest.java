@@ -1,0 +1,78 @@
+package dev.dwellwise.http;
+
+import static org.hamcrest.Matchers.equalTo;
+import static org.hamcrest.Matchers.matchesPattern;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import io.restassured.response.Response;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.Timeout;
+
+/** Every answer carries a request id, and so does every log line written while serving it. */
+@Timeout(20)
+class RequestIdTest {
+
+    private static final String TOKEN = "request-id-token-0123456789";
+    private static final String UUID = "[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}";
+    private static RunningService service;
+
+    @BeforeAll
+    static void start() {
+        service = RunningService.start(Map.of(ServiceConfig.API_TOKEN, TOKEN));
+    }
+
+    @AfterAll
+    static void stop() {
+        service.close();
+    }
+
+    @Test
+    void aSafeIdFromTheCallerIsEchoed() {
+        Http.given(service).header("X-Request-Id", "mes-batch-4711.2").get("/health/live").then()
+                .header("X-Request-Id", equalTo("mes-batch-4711.2"));
+    }
+
+    @Test
+    void anUnsafeIdIsReplacedByAFreshOne() {
+        Http.given(service).header("X-Request-Id", "evil id; injected=1").get("/health/live").then()
+                .header("X-Request-Id", matchesPattern(UUID));
+    }
+
+    @Test
+    void aProblemNamesTheIdOfItsRequest() {
+        Response response = Http.given(service).get("/v1/materials");
+        response.then().statusCode(401).body("requestId", equalTo(response.header("X-Request-Id")));
+    }
+
+    @Test
+    void theAccessLineOfEveryAnswerCarriesItsIdIncludingErrors() {
+        try (CapturedLog access = CapturedLog.of("dwellwise.access")) {
+            String refused = Http.given(service).header("X-Request-Id", "refused-1").get("/v1/materials")
+                    .then().statusCode(401).extract().header("X-Request-Id");
+            String missing = Http.given(service).header("Authorization", "Bearer " + TOKEN)
+                    .header("X-Request-Id", "missing-1").get("/v1/nowhere").then().statusCode(404)
+                    .extract().header("X-Request-Id");
+            String invalid = Http.given(service).header("Authorization", "Bearer " + TOKEN)
+                    .header("X-Request-Id", "invalid-1").contentType("application/json").body("{\"part\": {}}")
+                    .post("/v1/simulations").then().statusCode(422).extract().header("X-Request-Id");
+            assertEquals(List.of(refused, missing, invalid), access.requestIds());
+            assertTrue(access.messages().get(0).matches("GET /v1/materials 401 \\d+ms"), access.messages().get(0));
+            assertTrue(access.messages().get(1).matches("GET /v1/nowhere 404 \\d+ms"), access.messages().get(1));
+            assertTrue(access.messages().get(2).matches("POST /v1/simulations 422 \\d+ms"), access.messages().get(2));
+        }
+    }
+
+    @Test
+    void theSolversSummaryLineCarriesTheIdOfItsRequest() {
+        try (CapturedLog solver = CapturedLog.of("dev.dwellwise.report.Simulator")) {
+            Http.given(service).header("Authorization", "Bearer " + TOKEN).header("X-Request-Id", "solve-1")
+                    .contentType("application/json").body(Jobs.PANEL).post("/v1/simulations").then().statusCode(200);
+            assertEquals(List.of("solve-1"), solver.requestIds());
+        }
+    }
+}

@@ -1,0 +1,86 @@
+package dev.dwellwise.http;
+
+import dev.dwellwise.job.JobLimits;
+import dev.dwellwise.report.Simulator;
+import dev.dwellwise.thermal.ComputeBudget;
+import dev.dwellwise.thermal.LumpedModel;
+import dev.dwellwise.thermal.ModelSelector;
+import dev.dwellwise.thermal.Stepper;
+import dev.dwellwise.thermal.ThermalModel;
+import dev.dwellwise.thermal.ThermalPart;
+import java.util.Optional;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.TimeUnit;
+
+/**
+ * Holds solves inside the solver until released, so a test can have requests in flight for as
+ * long as it needs without sleeping: each solve counts itself in, then waits for the gate to open.
+ * The wait is bounded, so a test that forgets to open the gate fails instead of hanging.
+ */
+public final class SolveGate {
+
+    static final long MAX_HOLD_SECONDS = 10;
+
+    private final CountDownLatch open = new CountDownLatch(1);
+    private final CountDownLatch entered;
+
+    public SolveGate(int expectedSolves) {
+        this.entered = new CountDownLatch(expectedSolves);
+    }
+
+    /** The bundled services with a lumped model that waits at this gate. */
+    public Services services(ServiceConfig config) {
+        Services bundled = Services.bundled(config);
+        ModelSelector selector = new ModelSelector(new HeldModel(new LumpedModel()), Optional.empty());
+        Simulator simulator = new Simulator(bundled.materials(), selector, JobLimits.standard(),
+                ComputeBudget.standard().withMaxMillis(config.computeBudgetMillis()), "dwellwise test");
+        return new Services(simulator, bundled.materials(), bundled.examples(), bundled.mapper(), bundled.version(),
+                bundled.openApi());
+    }
+
+    /** Waits until the expected number of solves are held at the gate. */
+    public boolean awaitEntered() throws InterruptedException {
+        return entered.await(MAX_HOLD_SECONDS, TimeUnit.SECONDS);
+    }
+
+    public void open() {
+        open.countDown();
+    }
+
+    private final class HeldModel implements ThermalModel {
+        private final ThermalModel model;
+
+        HeldModel(ThermalModel model) {
+            this.model = model;
+        }
+
+        @Override
+        public String name() {
+            return model.name();
+        }
+
+        @Override
+        public String method() {
+            return model.method();
+        }
+
+        @Override
+        public double tolerance() {
+            return model.tolerance();
+        }
+
+        @Override
+        public Stepper newStepper(ThermalPart part, ComputeBudget budget) {
+            entered.countDown();
+            try {
+                if (!open.await(MAX_HOLD_SECONDS, TimeUnit.SECONDS)) {
+                    throw new IllegalStateException("the test never opened the gate");
+                }
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IllegalStateException("interrupted at the gate", e);
+            }
+            return model.newStepper(part, budget);
+        }
+    }
+}
