@@ -94,6 +94,14 @@ public record ServiceConfig(String host, int port, int workerThreads, int queueS
                 corsOrigins, apiToken, shutdownGraceSeconds);
     }
 
+    /**
+     * The longest a stop can take: the grace period for the requests in flight, then the HTTP
+     * pool's own wait for threads still busy. The orchestrator's grace period must exceed it.
+     */
+    public int longestStopSeconds() {
+        return shutdownGraceSeconds + (HttpServerSettings.POOL_STOP_MILLIS + 999) / 1000;
+    }
+
     /** Never prints the token. */
     @Override
     public String toString() {
