@@ -26,9 +26,13 @@ final class BearerAuth {
         this.expectedDigest = token.map(BearerAuth::digest);
     }
 
-    /** Before every request: refuses it unless authentication is off, the path is open, or the token matches. */
+    /**
+     * Before every routed request: refuses it unless authentication is off, the matched route is
+     * open, or the token matches. The route, not the raw path, decides: {@code /metrics/} reaches
+     * the same handler as {@code /metrics}.
+     */
     void check(Context ctx) {
-        if (expectedDigest.isEmpty() || ctx.method() == HandlerType.OPTIONS || OPEN_PATHS.contains(ctx.path())) {
+        if (expectedDigest.isEmpty() || ctx.method() == HandlerType.OPTIONS || OPEN_PATHS.contains(App.route(ctx))) {
             return;
         }
         String header = ctx.header("Authorization");

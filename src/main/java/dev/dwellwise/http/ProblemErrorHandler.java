@@ -3,6 +3,7 @@ package dev.dwellwise.http;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.nio.ByteBuffer;
+import java.nio.charset.StandardCharsets;
 import org.eclipse.jetty.http.HttpFields;
 import org.eclipse.jetty.http.HttpHeader;
 import org.eclipse.jetty.http.HttpStatus;
@@ -70,7 +71,7 @@ final class ProblemErrorHandler extends ErrorHandler {
         try {
             return mapper.writeValueAsBytes(problem);
         } catch (JsonProcessingException e) {
-            return ("{\"type\":\"about:blank\",\"status\":" + status + "}").getBytes(java.nio.charset.StandardCharsets.UTF_8);
+            return ("{\"type\":\"about:blank\",\"status\":" + status + "}").getBytes(StandardCharsets.UTF_8);
         }
     }
 }

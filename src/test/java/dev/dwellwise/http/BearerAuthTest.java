@@ -1,6 +1,8 @@
 package dev.dwellwise.http;
 
+import static org.hamcrest.Matchers.anyOf;
 import static org.hamcrest.Matchers.equalTo;
+import static org.hamcrest.Matchers.is;
 import static org.hamcrest.Matchers.startsWith;
 
 import java.util.Map;
@@ -72,5 +74,12 @@ class BearerAuthTest {
         Http.given(secured).get("/health/live").then().statusCode(200);
         Http.given(secured).get("/health/ready").then().statusCode(200);
         Http.given(secured).get("/metrics").then().statusCode(200);
+        Http.given(secured).get("/metrics/").then().statusCode(200);
+    }
+
+    @Test
+    void aPathThatOnlyLooksLikeAnOpenOneStaysClosed() {
+        Http.given(secured).get("/health/live/../../v1/materials").then().statusCode(anyOf(is(401), is(404)));
+        Http.given(secured).get("/v1/materials?x=/health/live").then().statusCode(401);
     }
 }
