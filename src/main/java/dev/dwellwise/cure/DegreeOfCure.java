@@ -54,12 +54,17 @@ public final class DegreeOfCure {
      * Seconds of an isothermal hold at {@code holdK} that take the degree from {@code fromDegree}
      * to {@code targetDegree}, located by an event on the integration; 0 when it is already there,
      * empty when the kinetics do not get there within {@link #HOLD_HORIZON_SECONDS} (for example
-     * Kamal–Sourour with k1 = 0 from alpha = 0, or a target of 1 with an order of 1 or more).
+     * Kamal–Sourour with k1 = 0 from alpha = 0) or never can (a target of 1 with an order of 1 or
+     * more). A target of 1 with an order n below 1 is met tangentially (the rate vanishes there), so
+     * that arrival time carries about the degree's tolerance to the power 1 − n, relative.
      */
     public static OptionalDouble secondsToReach(Kinetics kinetics, double holdK, double fromDegree,
                                                 double targetDegree, CureBudget budget) {
         if (fromDegree >= targetDegree) {
             return OptionalDouble.of(0);
+        }
+        if (targetDegree >= 1 && !kinetics.reachesFullCure()) {
+            return OptionalDouble.empty(); // the integration would "arrive" where alpha rounds to 1
         }
         EvaluationCounter counter = new EvaluationCounter(budget, "hold estimate for the degree of cure");
         DormandPrince853Integrator integrator = newIntegrator();

@@ -20,8 +20,13 @@ public record KamalSourourKinetics(double k1PreExponentialPerS, double k1Activat
                                    double m, double n, double initialDegree) implements Kinetics {
 
     public KamalSourourKinetics {
-        Kinetics.requireValid(initialDegree, k1PreExponentialPerS, k1ActivationEnergyJPerMol,
+        RateLawInvariants.require(initialDegree, k1PreExponentialPerS, k1ActivationEnergyJPerMol,
                 k2PreExponentialPerS, k2ActivationEnergyJPerMol, m, n);
+    }
+
+    @Override
+    public boolean reachesFullCure() {
+        return n < 1;
     }
 
     @Override

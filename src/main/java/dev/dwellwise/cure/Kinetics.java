@@ -15,15 +15,9 @@ public sealed interface Kinetics permits NthOrderKinetics, KamalSourourKinetics 
     /** The degree of cure at the start of the history, 0..1. */
     double initialDegree();
 
-    /** Checks the invariants every rate law shares: the degree in [0, 1] and non-negative parameters. */
-    static void requireValid(double initialDegree, double... nonNegative) {
-        if (!(initialDegree >= 0 && initialDegree <= 1)) {
-            throw new IllegalArgumentException("initialDegree must lie in [0, 1]: " + initialDegree);
-        }
-        for (double p : nonNegative) {
-            if (!(p >= 0)) {
-                throw new IllegalArgumentException("rate parameters must be finite and non-negative: " + p);
-            }
-        }
-    }
+    /**
+     * Whether alpha = 1 is reached in finite time: with (1 − alpha)^n, only for an order n below 1;
+     * from n = 1 up, full cure is approached but never reached (a computed alpha of 1 is rounding).
+     */
+    boolean reachesFullCure();
 }

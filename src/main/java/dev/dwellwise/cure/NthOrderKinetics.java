@@ -15,7 +15,12 @@ public record NthOrderKinetics(double preExponentialPerS, double activationEnerg
                                double initialDegree) implements Kinetics {
 
     public NthOrderKinetics {
-        Kinetics.requireValid(initialDegree, preExponentialPerS, activationEnergyJPerMol, order);
+        RateLawInvariants.require(initialDegree, preExponentialPerS, activationEnergyJPerMol, order);
+    }
+
+    @Override
+    public boolean reachesFullCure() {
+        return order < 1;
     }
 
     @Override

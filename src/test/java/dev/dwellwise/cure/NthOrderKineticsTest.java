@@ -96,6 +96,18 @@ class NthOrderKineticsTest {
     }
 
     @Test
+    void aSliverOfAPieceLeftByAnEventCutCountsWithoutBreakingTheIntegration() {
+        // A stage cut by an event just after a step end leaves a piece far shorter than Commons Math's
+        // smallest integration interval (1e-12 relative); the degree must be that of the same path without it.
+        NthOrderKinetics kinetics = new NthOrderKinetics(2.0e7, 80e3, 1.6, 0);
+        double k = Arrhenius.rateConstant(2.0e7, 80e3, kelvin(190));
+        double kt = 2;
+        TemperaturePath withSliver = TemperaturePath.of(t -> kelvin(190), 0, 0.5 / k, 0.5 / k + 1e-14, kt / k);
+        assertEquals(1 - Math.pow(1 + 0.6 * kt, -1 / 0.6), DegreeOfCure.atEnd(withSliver, kinetics, BUDGET),
+                INTEGRATION);
+    }
+
+    @Test
     void aPathOfNoDurationLeavesTheInitialDegree() {
         NthOrderKinetics kinetics = new NthOrderKinetics(2.0e7, 80e3, 1.6, 0.3);
         assertEquals(0.3, DegreeOfCure.atEnd(TemperaturePath.of(t -> kelvin(190)), kinetics, BUDGET));
