@@ -35,7 +35,8 @@ class CureAnalysisTest {
     @Test
     void everyFigureTheSpecAsksForComesFromItsOwnCalculationOverTheWholeHistory() {
         CureFigures figures = CureAnalysis.of(FULL, bakeAndCool()).coldest();
-        // Time above 170 C between the closed-form crossings of the two stages (see TimeAboveTest), 1e-4 s.
+        // Time above 170 C between the closed-form crossings of the two stages (Incropera Eqs. 5.6-5.7 [M];
+        // see TimeAboveTest), 1e-4 s.
         double tau1 = LumpedRuns.tau(30);
         double tau2 = LumpedRuns.tau(20);
         double at600 = 200 - 180 * Math.exp(-600 / tau1);
@@ -49,7 +50,8 @@ class CureAnalysisTest {
                 kelvin(bakeAndCoolC(t, tau1, tau2, at600))), 600, 1200, 20_000);
         double equivalent = figures.equivalentSeconds().getAsDouble();
         assertEquals(reference, equivalent, 1e-7 * reference);
-        // Separable kinetics: the isothermal closed form at T_ref for t_eq (see NthOrderKineticsTest), 1e-9.
+        // Separable kinetics: the isothermal closed form [C] at T_ref run for t_eq (REFERENCES.md section 6 [M];
+        // see NthOrderKineticsTest), 1e-9.
         double kt = Arrhenius.rateConstant(2.0e7, 80e3, kelvin(180)) * equivalent;
         double degree = figures.degree().getAsDouble();
         assertEquals(1 - Math.pow(1 + 0.6 * kt, -1 / 0.6), degree, 1e-9);

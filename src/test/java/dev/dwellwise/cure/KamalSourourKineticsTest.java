@@ -47,7 +47,8 @@ class KamalSourourKineticsTest {
 
     @Test
     void withoutTheNonCatalyticTermAnUnseededResinStaysUncured() {
-        // k1 = 0 and alpha0 = 0: the rate (0 + k2 0^m)(1 - 0)^n is 0, so alpha stays exactly 0.
+        // REFERENCES.md section 7, modelling note: with k1 = 0 the rate vanishes at alpha = 0, here
+        // (0 + k2 0^m)(1 - 0)^n = 0 exactly, so alpha stays exactly 0.
         assertEquals(0.0, DegreeOfCure.atEnd(Paths.rampAndHold(FROM_K, TO_K, RAMP, END), kinetics(0, 0), BUDGET));
     }
 

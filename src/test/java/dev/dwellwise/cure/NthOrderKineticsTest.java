@@ -28,7 +28,8 @@ class NthOrderKineticsTest {
 
     @Test
     void firstOrderFollowsOneMinusExpOfMinusKt() {
-        // DESIGN.md's example rate law (A = 2e7 1/s, E = 80 kJ/mol), first order, 190 C, k t = 2.3.
+        // REFERENCES.md section 7 [C]: n = 1, alpha = 1 - exp(-k t). DESIGN.md's example rate law
+        // (A = 2e7 1/s, E = 80 kJ/mol), first order, held at 190 C for k t = 2.3.
         NthOrderKinetics kinetics = new NthOrderKinetics(2.0e7, 80e3, 1, 0);
         double alpha = DegreeOfCure.atEnd(holdFor(kinetics, kelvin(190), 2.3), kinetics, BUDGET);
         assertEquals(1 - Math.exp(-2.3), alpha, INTEGRATION);
@@ -43,6 +44,7 @@ class NthOrderKineticsTest {
 
     @Test
     void orderOnePointSixFromAnInitialDegreeFollowsTheClosedForm() {
+        // REFERENCES.md section 7 [C], n != 1 from alpha0 = 0.2: (1 - alpha)^(-0.6) = 0.8^(-0.6) + 0.6 k t.
         NthOrderKinetics kinetics = new NthOrderKinetics(2.0e7, 80e3, 1.6, 0.2);
         double kt = 3;
         double exact = 1 - Math.pow(Math.pow(0.8, -0.6) + 0.6 * kt, -1 / 0.6);
@@ -51,7 +53,8 @@ class NthOrderKineticsTest {
 
     @Test
     void anOrderBelowOneReachesFullCureInFiniteTimeAndStaysThereWithoutNaN() {
-        // n = 0.5: (1 - alpha)^0.5 = 1 - 0.5 k t, so alpha = 0.75 at k t = 1 and alpha = 1 from k t = 2 on.
+        // REFERENCES.md section 7 closed form [C] with n = 0.5: (1 - alpha)^0.5 = 1 - 0.5 k t, so alpha = 0.75
+        // at k t = 1 and alpha = 1 from k t = 2 on.
         NthOrderKinetics kinetics = new NthOrderKinetics(2.0e7, 80e3, 0.5, 0);
         assertEquals(0.75, DegreeOfCure.atEnd(holdFor(kinetics, kelvin(190), 1), kinetics, BUDGET), INTEGRATION);
         assertEquals(1.0, DegreeOfCure.atEnd(holdFor(kinetics, kelvin(190), 2), kinetics, BUDGET), INTEGRATION);
@@ -60,7 +63,7 @@ class NthOrderKineticsTest {
 
     @Test
     void orderZeroCuresLinearlyUntilFull() {
-        // n = 0: alpha = k t up to 1. The rate law must not keep going at alpha = 1, where (1 - alpha)^0 = 1.
+        // REFERENCES.md section 7 closed form [C] with n = 0: alpha = k t up to 1. The rate law must not keep going at alpha = 1, where (1 - alpha)^0 = 1.
         NthOrderKinetics kinetics = new NthOrderKinetics(2.0e7, 80e3, 0, 0);
         assertEquals(0.4, DegreeOfCure.atEnd(holdFor(kinetics, kelvin(190), 0.4), kinetics, BUDGET), INTEGRATION);
         assertEquals(1.0, DegreeOfCure.atEnd(holdFor(kinetics, kelvin(190), 2), kinetics, BUDGET));
