@@ -1,15 +1,20 @@
 package dev.dwellwise.http;
 
+import com.fasterxml.jackson.annotation.JsonSubTypes;
+import com.fasterxml.jackson.annotation.JsonTypeInfo;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.exc.StreamConstraintsException;
 import com.fasterxml.jackson.core.exc.StreamReadException;
 import com.fasterxml.jackson.databind.JsonMappingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.exc.InvalidTypeIdException;
 import com.fasterxml.jackson.databind.exc.MismatchedInputException;
 import com.fasterxml.jackson.databind.exc.PropertyBindingException;
 import dev.dwellwise.job.FieldError;
 import java.io.IOException;
+import java.util.Arrays;
 import java.util.List;
+import java.util.stream.Collectors;
 
 /**
  * Reads a request body into a record, translating Jackson's failures into problems that name the
@@ -43,6 +48,8 @@ final class JsonBodies {
         } catch (PropertyBindingException e) {
             throw invalid(e, "unknown property '" + e.getPropertyName() + "'"
                     + (e.getKnownPropertyIds() == null ? "" : "; known here: " + known(e)));
+        } catch (InvalidTypeIdException e) {
+            throw typeId(e);
         } catch (MismatchedInputException e) {
             if (e.getPath().isEmpty()) {
                 throw new ApiException(ProblemType.UNREADABLE_BODY, "the request body must be a JSON object");
@@ -55,6 +62,24 @@ final class JsonBodies {
         } catch (IOException e) {
             throw new ApiException(ProblemType.UNREADABLE_BODY, "the request body could not be read");
         }
+    }
+
+    /**
+     * A missing or unknown type name of a polymorphic object ({@code cure.kinetics.model}): named
+     * by its own field, with the names it may take.
+     */
+    private static ApiException typeId(InvalidTypeIdException e) {
+        Class<?> base = e.getBaseType() == null ? null : e.getBaseType().getRawClass();
+        JsonTypeInfo info = base == null ? null : base.getAnnotation(JsonTypeInfo.class);
+        JsonSubTypes subtypes = base == null ? null : base.getAnnotation(JsonSubTypes.class);
+        if (info == null || subtypes == null) {
+            return invalid(e, "invalid value");
+        }
+        String field = path(e.getPath()) + "." + info.property();
+        String names = Arrays.stream(subtypes.value()).map(JsonSubTypes.Type::name).collect(Collectors.joining(", "));
+        String message = (e.getTypeId() == null ? "is required" : "unknown " + info.property() + " '" + e.getTypeId()
+                + "'") + "; one of " + names;
+        return new ApiException(ProblemType.INVALID_JOB, field + ": " + message, List.of(new FieldError(field, message)));
     }
 
     private static ApiException invalid(JsonMappingException e, String message) {
