@@ -29,4 +29,14 @@ public record GlassTransitionSpec(double tg0K, double tgFullK, double lambda, Op
         double fraction = lambda * degree / (1 - (1 - lambda) * degree);
         return tg0K + (tgFullK - tg0K) * fraction;
     }
+
+    /**
+     * The degree of cure at which Tg reaches {@code kelvin}, the inverse of {@link #kelvinAt}: with
+     * F = (Tg − Tg0)/(Tg∞ − Tg0), alpha = F / [λ + (1 − λ) F]; clamped to [0, 1], since Tg0 is
+     * reached at once and Tg∞ bounds every Tg.
+     */
+    public double degreeAt(double kelvin) {
+        double fraction = Math.max(0, Math.min(1, (kelvin - tg0K) / (tgFullK - tg0K)));
+        return fraction / (lambda + (1 - lambda) * fraction);
+    }
 }

@@ -1,6 +1,7 @@
 package dev.dwellwise.http;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
+import dev.dwellwise.cure.CureComputationException;
 import dev.dwellwise.job.FieldError;
 import dev.dwellwise.job.InvalidJobException;
 import dev.dwellwise.thermal.ComputeLimitExceededException;
@@ -77,6 +78,9 @@ public final class App {
                             e.getMessage() + (e.limit() == ComputeLimitExceededException.Limit.SAMPLES
                                     ? "; raise output.sampleSeconds or set output.series to false"
                                     : "; shorten the stages or give them smaller maxSeconds")))));
+            cfg.routes.exception(CureComputationException.class, (e, ctx) -> problems.write(ctx,
+                    ProblemType.COMPUTE_LIMIT, e.getMessage(), List.of(new FieldError(jobPrefix(ctx) + "cure",
+                            e.getMessage() + "; check the cure spec's parameters against the coating's data"))));
             cfg.routes.exception(HttpResponseException.class, (e, ctx) -> problems.write(ctx,
                     fromStatus(e.getStatus()), e.getMessage(), List.of()));
             cfg.routes.exception(JsonProcessingException.class, (e, ctx) -> problems.write(ctx,

@@ -1,6 +1,7 @@
 package dev.dwellwise.http;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.dwellwise.cure.CureBudget;
 import dev.dwellwise.job.ExampleLibrary;
 import dev.dwellwise.job.JobLimits;
 import dev.dwellwise.job.WireJson;
@@ -29,7 +30,7 @@ public record Services(Simulator simulator, MaterialLibrary materials, ExampleLi
         String version = readVersion();
         ModelSelector selector = new ModelSelector(new LumpedModel(), Optional.empty());
         Simulator simulator = new Simulator(materials, selector, JobLimits.standard(), ComputeBudget.standard(),
-                "dwellwise " + version);
+                CureBudget.standard(), "dwellwise " + version);
         return new Services(simulator, materials, ExampleLibrary.bundled(mapper), mapper, version,
                 resource("/openapi/dwellwise.yaml"));
     }

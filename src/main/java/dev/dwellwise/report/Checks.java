@@ -163,7 +163,7 @@ public final class Checks {
         return String.format(Locale.ROOT, "%.1f s", seconds);
     }
 
-    private static String trim(double v) {
+    static String trim(double v) {
         return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(v);
     }
 }

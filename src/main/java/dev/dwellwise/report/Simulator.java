@@ -1,5 +1,6 @@
 package dev.dwellwise.report;
 
+import dev.dwellwise.cure.CureBudget;
 import dev.dwellwise.job.CanonicalJson;
 import dev.dwellwise.job.Job;
 import dev.dwellwise.job.JobLimits;
@@ -9,13 +10,15 @@ import dev.dwellwise.thermal.ComputeBudget;
 import dev.dwellwise.thermal.MaterialLibrary;
 import dev.dwellwise.thermal.ModelSelector;
 import dev.dwellwise.thermal.ThermalProblem;
+import java.util.ArrayList;
 import java.util.List;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
 /**
  * The whole simulation of one job: validate, fill defaults, hash, build the problem, choose the
- * model and solve, check, and write up. Stateless and thread-safe; every solve gets fresh steppers.
+ * model and solve, check (the cure included), and write up. Stateless and thread-safe; every solve
+ * gets fresh steppers.
  */
 public final class Simulator {
 
@@ -25,14 +28,16 @@ public final class Simulator {
     private final ModelSelector selector;
     private final JobLimits limits;
     private final ComputeBudget budget;
+    private final CureBudget cureBudget;
     private final String service;
 
     public Simulator(MaterialLibrary library, ModelSelector selector, JobLimits limits, ComputeBudget budget,
-                     String service) {
+                     CureBudget cureBudget, String service) {
         this.library = library;
         this.selector = selector;
         this.limits = limits;
         this.budget = budget;
+        this.cureBudget = cureBudget;
         this.service = service;
     }
 
@@ -47,15 +52,26 @@ public final class Simulator {
 
     /** As {@link #simulate(Job)}, with field paths under {@code prefix} (for a job nested in a request). */
     public SimulationResult simulate(Job raw, String prefix) {
-        long started = System.nanoTime();
         Job job = JobValidator.validated(raw, library, limits, prefix);
-        String hash = CanonicalJson.sha256(job);
-        ThermalProblem problem = new ProblemBuilder(library).build(job, budget);
-        ModelSelector.Selection selection = selector.solve(problem, job.model());
-        List<CheckResult> checks = Checks.thermal(selection, job.limits());
+        return run(job, job);
+    }
+
+    /** Solves {@code solved} and reports it under the hash of {@code hashed}, the same job as sent. */
+    private SimulationResult run(Job hashed, Job solved) {
+        long started = System.nanoTime();
+        String hash = CanonicalJson.sha256(hashed);
+        ThermalProblem problem = new ProblemBuilder(library).build(solved, budget);
+        ModelSelector.Selection selection = selector.solve(problem, solved.model());
+        List<CheckResult> checks = new ArrayList<>(Checks.thermal(selection, solved.limits()));
+        CureReport cure = null;
+        if (solved.cure() != null) {
+            CureAssessment assessment = CureAssessment.of(solved.cure(), selection.history(), cureBudget);
+            cure = assessment.report();
+            checks.addAll(assessment.checks());
+        }
         Provenance provenance = new Provenance(service, hash, selection.model().method(),
                 selection.model().tolerance(), selection.history().steps(), selection.history().evaluations());
-        SimulationResult result = ResultAssembler.assemble(job, selection, checks, provenance);
+        SimulationResult result = ResultAssembler.assemble(solved, selection, cure, checks, provenance);
         if (LOG.isInfoEnabled()) {
             LOG.info("solved model={} stages={} steps={} evaluations={} verdict={} ms={}",
                     selection.history().modelName(), problem.stages().size(), selection.history().steps(),

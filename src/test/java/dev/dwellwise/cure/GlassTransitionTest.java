@@ -32,4 +32,15 @@ class GlassTransitionTest {
         GlassTransitionSpec linear = new GlassTransitionSpec(300, 400, 1, OptionalDouble.empty());
         assertEquals(340, linear.kelvinAt(0.4), 1e-12);
     }
+
+    @Test
+    void theDegreeAtATgUndoesTheEquationAndStaysInsideZeroToOne() {
+        // Round trip through the REFERENCES.md section 7 case [C]: degreeAt(119.03 C) = 0.78, where the printed
+        // half unit of 0.005 K moves alpha by 2e-5 (d alpha/dTg = 0.0041 /K there), hence 1e-4. Below Tg0 nothing is
+        // needed and Tg_inf needs full cure.
+        assertEquals(0.78, RESIN.degreeAt(RESIN.kelvinAt(0.78)), 1e-12);
+        assertEquals(0.78, RESIN.degreeAt(kelvin(119.03)), 1e-4);
+        assertEquals(0, RESIN.degreeAt(kelvin(-40)));
+        assertEquals(1, RESIN.degreeAt(kelvin(180)), 1e-12);
+    }
 }
