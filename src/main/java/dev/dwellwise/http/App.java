@@ -35,6 +35,7 @@ public final class App {
         Problems problems = new Problems(services.mapper());
         SimulationRoutes simulations = new SimulationRoutes(services, new JsonBodies(services.mapper()), config);
         LibraryRoutes library = new LibraryRoutes(services);
+        ReleaseRoutes releases = new ReleaseRoutes(services, new JsonBodies(services.mapper()), config);
         return Javalin.create(cfg -> {
             cfg.startup.showJavalinBanner = false;
             cfg.startup.showOldJavalinVersionWarning = false;
@@ -66,6 +67,7 @@ public final class App {
             cfg.routes.get("/v1/examples", library::examples);
             cfg.routes.get("/v1/examples/{id}", library::example);
             cfg.routes.post("/v1/simulations", simulations::simulate);
+            cfg.routes.post("/v1/release-checks", releases::release);
 
             cfg.routes.exception(ApiException.class, (e, ctx) -> problems.write(ctx, e.type(), e.getMessage(),
                     e.errors()));

@@ -29,4 +29,9 @@ public record Job(Part part, List<Stage> stages, Cure cure, Limits limits, Strin
                 cure == null ? null : cure.withDefaults(), limits == null ? Limits.NONE : limits,
                 model == null ? DEFAULT_MODEL : model, slabCells, output == null ? Output.DEFAULTS : output.withDefaults());
     }
+
+    /** The same job with other output wanted: what is computed and judged does not depend on it. */
+    public Job withOutput(Output other) {
+        return new Job(part, stages, cure, limits, model, slabCells, other);
+    }
 }

@@ -4,6 +4,7 @@ import dev.dwellwise.thermal.MaterialLibrary;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
+import java.util.regex.Pattern;
 
 /**
  * Checks every value of a bound job and names each offending field by its path. Collects all the
@@ -14,6 +15,10 @@ public final class JobValidator extends FieldChecks {
     private static final double MAX_CONVECTION = 10_000;
     private static final double MAX_THICKNESS_MM = 1000;
     private static final Set<String> MODELS = Set.of("auto", "lumped", "slab");
+    /** A batch id goes into answers and log lines as it is, so only characters that are safe in both. */
+    private static final Pattern SAFE_BATCH_ID = Pattern.compile("[A-Za-z0-9._:/-]{1,128}");
+    /** Where the job sits in a release request, for its field paths. */
+    public static final String RELEASE_JOB_PREFIX = "job.";
 
     private final MaterialLibrary library;
     private final JobLimits limits;
@@ -41,6 +46,29 @@ public final class JobValidator extends FieldChecks {
             throw new InvalidJobException(v.errors);
         }
         return job.withDefaults();
+    }
+
+    /**
+     * Validates a release request, its batch id and its job (field paths under {@code job.}), and
+     * throws {@link InvalidJobException} listing every error of both; returns the job with defaults.
+     */
+    public static Job validated(ReleaseRequest request, MaterialLibrary library, JobLimits limits) {
+        List<FieldError> errors = new ArrayList<>();
+        if (request.batchId() == null) {
+            errors.add(new FieldError("batchId", "is required"));
+        } else if (!SAFE_BATCH_ID.matcher(request.batchId()).matches()) {
+            errors.add(new FieldError("batchId", "must be 1 to 128 letters, digits and . _ : / -"));
+        }
+        Job job = null;
+        try {
+            job = validated(request.job(), library, limits, RELEASE_JOB_PREFIX);
+        } catch (InvalidJobException e) {
+            errors.addAll(e.errors());
+        }
+        if (!errors.isEmpty()) {
+            throw new InvalidJobException(errors);
+        }
+        return job;
     }
 
     private void job(Job job, String p) {

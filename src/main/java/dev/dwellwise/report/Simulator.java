@@ -5,7 +5,9 @@ import dev.dwellwise.job.CanonicalJson;
 import dev.dwellwise.job.Job;
 import dev.dwellwise.job.JobLimits;
 import dev.dwellwise.job.JobValidator;
+import dev.dwellwise.job.Output;
 import dev.dwellwise.job.ProblemBuilder;
+import dev.dwellwise.job.ReleaseRequest;
 import dev.dwellwise.thermal.ComputeBudget;
 import dev.dwellwise.thermal.MaterialLibrary;
 import dev.dwellwise.thermal.ModelSelector;
@@ -23,6 +25,13 @@ import org.slf4j.LoggerFactory;
 public final class Simulator {
 
     private static final Logger LOG = LoggerFactory.getLogger(Simulator.class);
+
+    /**
+     * What a release decision needs of the output: nothing. No series and no profiles, and one
+     * sample a day (the coarsest spacing a job may ask for), so that only the stage boundaries are
+     * sampled; samples are read off the solution and change no figure.
+     */
+    private static final Output DECISION_ONLY = new Output(86_400.0, false, null);
 
     private final MaterialLibrary library;
     private final ModelSelector selector;
@@ -54,6 +63,19 @@ public final class Simulator {
     public SimulationResult simulate(Job raw, String prefix) {
         Job job = JobValidator.validated(raw, library, limits, prefix);
         return run(job, job);
+    }
+
+    /**
+     * Answers the MES's release question. The job is hashed as the client sent it (defaults
+     * filled), so the hash equals that of a simulation of the same job, and solved without its
+     * output, which a decision does not need.
+     */
+    public ReleaseAnswer release(ReleaseRequest request) {
+        Job job = JobValidator.validated(request, library, limits);
+        ReleaseAnswer answer = ReleaseAnswer.of(request.batchId(), run(job, job.withOutput(DECISION_ONLY)));
+        LOG.info("release batch={} release={} inputSha256={}", answer.batchId(), answer.release(),
+                answer.inputSha256());
+        return answer;
     }
 
     /** Solves {@code solved} and reports it under the hash of {@code hashed}, the same job as sent. */
