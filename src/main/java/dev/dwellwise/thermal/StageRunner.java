@@ -228,6 +228,9 @@ public final class StageRunner {
 
     /** Per-stage extremes gathered over the segments, kelvin and K/s. */
     private static final class StageFigures {
+        /** A rise smaller than this (kelvin) between scan points is integration noise, not a peak worth refining. */
+        private static final double PEAK_NOISE = 1e-9;
+
         private final double emissivity;
         private final StageConditions stage;
         private final double stageStart;
@@ -266,7 +269,7 @@ public final class StageRunner {
                 peakK = Math.max(peakK, hot[i]);
             }
             for (int i = 1; i + 1 < times.length; i++) {
-                if (hot[i] >= hot[i - 1] && hot[i] >= hot[i + 1] && hot[i] > Math.min(hot[i - 1], hot[i + 1])) {
+                if (hot[i] > hot[i - 1] + PEAK_NOISE && hot[i] > hot[i + 1] + PEAK_NOISE) {
                     // an interior maximum: refine it between the neighbouring scan points
                     peakK = Math.max(peakK, EventLocator.maximum(t -> segment.at(t).hottestK(),
                             times[i - 1], times[i + 1]));
