@@ -8,6 +8,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.exc.MismatchedInputException;
 import com.fasterxml.jackson.databind.exc.PropertyBindingException;
 import dev.dwellwise.job.FieldError;
+import dev.dwellwise.job.WireJson;
 import java.io.IOException;
 import java.util.List;
 
@@ -58,25 +59,9 @@ final class JsonBodies {
     }
 
     private static ApiException invalid(JsonMappingException e, String message) {
-        String field = path(e.getPath());
+        String field = WireJson.path(e.getPath());
         return new ApiException(ProblemType.INVALID_JOB, field + ": " + message,
                 List.of(new FieldError(field, message)));
-    }
-
-    /** Jackson's reference path as the contract writes it: {@code stages[2].until.seconds}. */
-    static String path(List<JsonMappingException.Reference> refs) {
-        StringBuilder out = new StringBuilder();
-        for (JsonMappingException.Reference ref : refs) {
-            if (ref.getFieldName() != null) {
-                if (out.length() > 0) {
-                    out.append('.');
-                }
-                out.append(ref.getFieldName());
-            } else if (ref.getIndex() >= 0) {
-                out.append('[').append(ref.getIndex()).append(']');
-            }
-        }
-        return out.length() == 0 ? "body" : out.toString();
     }
 
     private static String known(PropertyBindingException e) {
