@@ -1,0 +1,43 @@
+package dev.dwellwise.thermal;
+
+/**
+ * How finely the slab back end resolves a part.
+ *
+ * @param cells             finite-volume cells per conduction length (the thickness over the exposed
+ *                          faces): a symmetric wall exposed on both faces is computed on its half
+ *                          with this many, an asymmetric one with twice this many through the whole
+ *                          thickness; every layer gets at least one
+ * @param relativeTolerance relative tolerance of the local error control of the time integration
+ */
+public record SlabResolution(int cells, double relativeTolerance) {
+
+    /**
+     * Default cells: with the default tolerance, within 0.05 K of a converged solution on the
+     * representative jobs of {@code SlabDefaultResolutionTest}.
+     */
+    public static final int DEFAULT_CELLS = 40;
+
+    /** Default tolerance: about 4e-4 K of local error per step on a 400 K part. */
+    public static final double DEFAULT_RELATIVE_TOLERANCE = 1e-6;
+
+    public SlabResolution {
+        if (cells < 2) {
+            throw new IllegalArgumentException("a slab needs at least 2 cells");
+        }
+        if (!(relativeTolerance > 0 && relativeTolerance < 1e-2)) {
+            throw new IllegalArgumentException("relative tolerance must lie in (0, 0.01)");
+        }
+    }
+
+    public static SlabResolution standard() {
+        return new SlabResolution(DEFAULT_CELLS, DEFAULT_RELATIVE_TOLERANCE);
+    }
+
+    public SlabResolution withCells(int n) {
+        return new SlabResolution(n, relativeTolerance);
+    }
+
+    public SlabResolution withRelativeTolerance(double tolerance) {
+        return new SlabResolution(cells, tolerance);
+    }
+}
