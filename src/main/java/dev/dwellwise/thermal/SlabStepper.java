@@ -103,7 +103,7 @@ final class SlabStepper implements Stepper {
         double fastest = 0;
         double[] rate = derivative.rate();
         for (int i = 0; i < y.length; i++) {
-            double weight = TrBdf2.ABSOLUTE_TOLERANCE_K + relativeTolerance * Math.abs(y[i]);
+            double weight = relativeTolerance * y[i];
             fastest = Math.max(fastest, Math.abs(rate[i]) / weight);
         }
         return fastest > 0 ? Math.min(remaining, 1 / fastest) : remaining;

@@ -31,9 +31,6 @@ final class TrBdf2 {
     private static final double NEWTON_FRACTION = 1e-3;
     private static final int NEWTON_ITERATIONS = 8;
 
-    /** Absolute part of the error weight, kelvin, next to the relative part. */
-    static final double ABSOLUTE_TOLERANCE_K = 1e-6;
-
     private final SlabEquations equations;
     private final double relativeTolerance;
     private final SlabEquations.Linearisation linearisation;
@@ -72,13 +69,14 @@ final class TrBdf2 {
     }
 
     /**
-     * Attempts the step from (t, y) with flux F₁ = {@code start.flux()}; returns null when Newton
+     * Attempts the step from (t, y), judging its local error in the weights rtol · T (kelvin, so
+     * relative error control alone is meaningful) with flux F₁ = {@code start.flux()}; returns null when Newton
      * fails to converge (the caller shrinks the step).
      */
     Step attempt(double t, double h, double[] y, Derivative start, SurfaceExposure exposure) {
         int n = y.length;
         for (int i = 0; i < n; i++) {
-            weight[i] = ABSOLUTE_TOLERANCE_K + relativeTolerance * Math.abs(y[i]);
+            weight[i] = relativeTolerance * y[i]; // kelvin: positive, far from zero
         }
         double[] f1 = start.flux();
         double[] stage = y.clone();
@@ -109,7 +107,7 @@ final class TrBdf2 {
         solves++;
         double norm = 0;
         for (int i = 0; i < n; i++) {
-            double w = ABSOLUTE_TOLERANCE_K + relativeTolerance * Math.max(Math.abs(y[i]), Math.abs(end[i]));
+            double w = relativeTolerance * Math.max(y[i], end[i]);
             norm = Math.max(norm, Math.abs(error[i]) / w);
         }
         return new Step(end, derivative, norm);
