@@ -22,7 +22,7 @@ class SlabEnergyBalanceTest {
      * Per cycle the faces pass about 4e5 J/m2 each way. The scheme conserves heat exactly with its own
      * quadrature of the face fluxes; the test's quadrature of the interpolated face flux differs from
      * it by the time-integration error, which falls with the tolerance: 2e-4 of the heat that goes in
-     * during the heating at the default tolerance (measured: up to 6e-5), 2e-5 at 1e-8 (measured:
+     * during the heating at a tolerance of 1e-6 (measured: up to 6e-5), 2e-5 at 1e-8 (measured:
      * up to 2.7e-6). A heat leak in the scheme would not fall so.
      */
     @ParameterizedTest(name = "{0}, relative tolerance {1}")
