@@ -25,9 +25,12 @@ public record SlabResolution(int cells, double relativeTolerance) {
      */
     public static final double DEFAULT_RELATIVE_TOLERANCE = 1e-7;
 
+    /** Far beyond any accuracy need; keeps a resolution from a job from allocating without bound. */
+    public static final int MAX_CELLS = 10_000;
+
     public SlabResolution {
-        if (cells < 2) {
-            throw new IllegalArgumentException("a slab needs at least 2 cells");
+        if (cells < 2 || cells > MAX_CELLS) {
+            throw new IllegalArgumentException("cells must lie in [2, " + MAX_CELLS + "]");
         }
         if (!(relativeTolerance > 0 && relativeTolerance < 1e-2)) {
             throw new IllegalArgumentException("relative tolerance must lie in (0, 0.01)");

@@ -1,5 +1,7 @@
 package dev.dwellwise.thermal;
 
+import java.util.Arrays;
+
 /**
  * Steps the slab of {@link SlabModel} with {@link TrBdf2}, one accepted step per {@link #advance}.
  * Step control on the weighted max norm of the local error estimate: accept when it is at most 1,
@@ -41,7 +43,7 @@ final class SlabStepper implements Stepper {
         this.budget = budget;
         this.relativeTolerance = relativeTolerance;
         this.y = new double[grid.cells()];
-        java.util.Arrays.fill(y, part.initialK());
+        Arrays.fill(y, part.initialK());
         this.exposure = SurfaceExposure.none(part.initialK());
     }
 
@@ -67,6 +69,9 @@ final class SlabStepper implements Stepper {
         if (derivative == null) {
             throw new IllegalStateException("enterStage must come before advance");
         }
+        if (!(limit > t)) {
+            throw new IllegalArgumentException("the limit " + limit + " s is not after the current time " + t + " s");
+        }
         if (Double.isNaN(nextStep)) {
             nextStep = initialStep(limit - t);
         }
@@ -81,6 +86,7 @@ final class SlabStepper implements Stepper {
                 rejected = true;
                 continue;
             }
+            // an error of zero (nothing changing) asks for the largest growth, not a division by zero
             double factor = SAFETY * Math.pow(Math.max(step.errorNorm(), 1e-12), -1.0 / 3);
             if (step.errorNorm() <= 1) {
                 double end = h == remaining ? limit : t + h;
@@ -116,6 +122,7 @@ final class SlabStepper implements Stepper {
         }
     }
 
+    /** Back to the interpolated state at {@code time}; its flux is evaluated afresh for the next step. */
     @Override
     public void cutAt(double time) {
         y = last.cellsAt(time);

@@ -160,7 +160,8 @@ final class TrBdf2 {
     }
 
     /**
-     * The cell fluxes F (W/m²) at a state and the temperature rates F/C (K/s) they give.
+     * The cell fluxes F (W/m²) at a state and the temperature rates F/C (K/s) they give. Like
+     * {@link Step}, it owns its arrays and nobody writes to them (not copied: this is the inner loop).
      */
     record Derivative(double[] flux, double[] rate) {
 

@@ -30,7 +30,7 @@ class SlabConvergenceTest {
         double[][] errors = new double[3][];
         int[] cells = {10, 20, 40};
         for (int r = 0; r < cells.length; r++) {
-            Observation o = StageRunner.run(problem, new SlabModel(new SlabResolution(cells[r], 1e-11))).finalState();
+            Observation o = StageRunner.run(problem, new SlabModel(new SlabResolution(cells[r], 1e-10))).finalState();
             errors[r] = new double[] {
                 o.surfaceK() - (473.15 - 180 * series.theta(1, fo)),
                 o.coreK() - (473.15 - 180 * series.theta(0, fo)),
@@ -59,7 +59,7 @@ class SlabConvergenceTest {
         int[] cells = {8, 16, 32};
         Observation[] results = new Observation[3];
         for (int r = 0; r < 3; r++) {
-            results[r] = StageRunner.run(problem, new SlabModel(new SlabResolution(cells[r], 1e-11))).finalState();
+            results[r] = StageRunner.run(problem, new SlabModel(new SlabResolution(cells[r], 1e-10))).finalState();
         }
         assertInRange(richardson(results[0].surfaceK(), results[1].surfaceK(), results[2].surfaceK()), "front face");
         assertInRange(richardson(results[0].meanK(), results[1].meanK(), results[2].meanK()), "mean");
