@@ -11,6 +11,7 @@ import com.fasterxml.jackson.databind.exc.InvalidTypeIdException;
 import com.fasterxml.jackson.databind.exc.MismatchedInputException;
 import com.fasterxml.jackson.databind.exc.PropertyBindingException;
 import dev.dwellwise.job.FieldError;
+import dev.dwellwise.job.WireJson;
 import java.io.IOException;
 import java.util.Arrays;
 import java.util.List;
@@ -75,7 +76,7 @@ final class JsonBodies {
         if (info == null || subtypes == null) {
             return invalid(e, "invalid value");
         }
-        String field = path(e.getPath()) + "." + info.property();
+        String field = WireJson.path(e.getPath()) + "." + info.property();
         String names = Arrays.stream(subtypes.value()).map(JsonSubTypes.Type::name).collect(Collectors.joining(", "));
         String message = (e.getTypeId() == null ? "is required" : "unknown " + info.property() + " '" + e.getTypeId()
                 + "'") + "; one of " + names;
@@ -83,25 +84,9 @@ final class JsonBodies {
     }
 
     private static ApiException invalid(JsonMappingException e, String message) {
-        String field = path(e.getPath());
+        String field = WireJson.path(e.getPath());
         return new ApiException(ProblemType.INVALID_JOB, field + ": " + message,
                 List.of(new FieldError(field, message)));
-    }
-
-    /** Jackson's reference path as the contract writes it: {@code stages[2].until.seconds}. */
-    static String path(List<JsonMappingException.Reference> refs) {
-        StringBuilder out = new StringBuilder();
-        for (JsonMappingException.Reference ref : refs) {
-            if (ref.getFieldName() != null) {
-                if (out.length() > 0) {
-                    out.append('.');
-                }
-                out.append(ref.getFieldName());
-            } else if (ref.getIndex() >= 0) {
-                out.append('[').append(ref.getIndex()).append(']');
-            }
-        }
-        return out.length() == 0 ? "body" : out.toString();
     }
 
     private static String known(PropertyBindingException e) {

@@ -20,6 +20,9 @@ final class LumpedStepper implements Stepper {
     private final ComputeBudget budget;
     private final DormandPrince853Integrator integrator;
     private final double faces;
+    /** The layers as arrays: C(T) is evaluated at every right-hand-side call. */
+    private final Material[] materials;
+    private final double[] thicknesses;
     private StageConditions stage;
     private double stageStart;
     private double t;
@@ -33,6 +36,8 @@ final class LumpedStepper implements Stepper {
         this.part = part;
         this.budget = budget;
         this.faces = part.exposedFaces();
+        this.materials = part.layers().stream().map(Layer::material).toArray(Material[]::new);
+        this.thicknesses = part.layers().stream().mapToDouble(Layer::thicknessM).toArray();
         this.integrator = new DormandPrince853Integrator(1e-9, 1e7,
                 LumpedModel.ABSOLUTE_TOLERANCE, LumpedModel.RELATIVE_TOLERANCE);
         this.temperatureK = part.initialK();
@@ -43,7 +48,11 @@ final class LumpedStepper implements Stepper {
         double elapsed = time - stageStart;
         double q = Physics.surfaceFlux(stage.convection(), stage.airK(elapsed), part.emissivity(),
                 stage.surroundingsK(elapsed), k);
-        return faces * q / part.areaHeatCapacity(k);
+        double capacity = 0;
+        for (int i = 0; i < materials.length; i++) {
+            capacity += materials[i].volumetricHeatCapacity(k) * thicknesses[i];
+        }
+        return faces * q / capacity;
     }
 
     @Override
@@ -166,11 +175,9 @@ final class LumpedStepper implements Stepper {
         }
 
         private double temperatureAt(double time) {
-            int i = 0;
-            while (i < pieces.size() - 1 && time > knots[i + 1]) {
-                i++;
-            }
-            StepInterpolator piece = pieces.get(i);
+            int i = java.util.Arrays.binarySearch(knots, 1, knots.length, time);
+            i = i >= 0 ? i - 1 : Math.min(-i - 2, pieces.size() - 1);
+            StepInterpolator piece = pieces.get(Math.max(0, i));
             piece.setInterpolatedTime(time);
             return piece.getInterpolatedState()[0];
         }

@@ -34,6 +34,70 @@ class StageSemanticsTest {
     }
 
     @Test
+    void aSampleOnAStepEndInsideAStageIsKeptExactlyOnce() {
+        // a stepper whose steps end on sample times must not lose those samples
+        ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0, 20);
+        ThermalProblem p = Parts.problem(part, 5,
+                Parts.stage("a", 200, 200, 30, new EndCondition.AfterDuration(30), 30));
+        ThermalModel fixedSteps = new ThermalModel() {
+            @Override
+            public String name() {
+                return "lumped";
+            }
+
+            @Override
+            public String method() {
+                return "lumped in windows of exactly 5 s";
+            }
+
+            @Override
+            public double tolerance() {
+                return LumpedModel.RELATIVE_TOLERANCE;
+            }
+
+            @Override
+            public Stepper newStepper(ThermalPart thermalPart, ComputeBudget budget) {
+                Stepper inner = new LumpedModel().newStepper(thermalPart, budget);
+                return new Stepper() {
+                    public void enterStage(StageConditions stage) {
+                        inner.enterStage(stage);
+                    }
+
+                    public double time() {
+                        return inner.time();
+                    }
+
+                    public Observation observe() {
+                        return inner.observe();
+                    }
+
+                    public Segment advance(double limit) {
+                        return inner.advance(Math.min(limit, inner.time() + 5));
+                    }
+
+                    public void cutAt(double t) {
+                        inner.cutAt(t);
+                    }
+
+                    public long steps() {
+                        return inner.steps();
+                    }
+
+                    public long evaluations() {
+                        return inner.evaluations();
+                    }
+
+                    public double[] profilePositionsM() {
+                        return inner.profilePositionsM();
+                    }
+                };
+            }
+        };
+        ThermalHistory h = StageRunner.run(p, fixedSteps);
+        assertArrayEquals(new double[] {0, 5, 10, 15, 20, 25, 30}, h.series().timeSeconds(), 1e-9);
+    }
+
+    @Test
     void aConditionAlreadyMetAtTheStageStartEndsTheStageAtOnce() {
         ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0, 150);
         ThermalHistory h = run(part, 10,
