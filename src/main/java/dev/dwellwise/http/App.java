@@ -4,7 +4,6 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import dev.dwellwise.job.FieldError;
 import dev.dwellwise.job.InvalidJobException;
 import dev.dwellwise.thermal.ComputeLimitExceededException;
-import dev.dwellwise.thermal.ModelUnavailableException;
 import io.javalin.Javalin;
 import io.javalin.http.Context;
 import io.javalin.http.HttpResponseException;
@@ -70,8 +69,6 @@ public final class App {
                     e.errors()));
             cfg.routes.exception(InvalidJobException.class, (e, ctx) -> problems.write(ctx, ProblemType.INVALID_JOB,
                     summary(e.errors()), e.errors()));
-            cfg.routes.exception(ModelUnavailableException.class, (e, ctx) -> problems.write(ctx,
-                    ProblemType.INVALID_JOB, e.getMessage(), List.of(new FieldError(modelField(ctx), e.getMessage()))));
             cfg.routes.exception(ComputeLimitExceededException.class, (e, ctx) -> problems.write(ctx,
                     ProblemType.COMPUTE_LIMIT, e.getMessage(), List.of(new FieldError(limitField(ctx, e),
                             e.getMessage() + (e.limit() == ComputeLimitExceededException.Limit.SAMPLES
@@ -120,10 +117,6 @@ public final class App {
     private static String jobPrefix(Context ctx) {
         String prefix = ctx.attribute(SimulationRoutes.JOB_PREFIX);
         return prefix == null ? "" : prefix;
-    }
-
-    private static String modelField(Context ctx) {
-        return jobPrefix(ctx) + "model";
     }
 
     private static String limitField(Context ctx, ComputeLimitExceededException e) {

@@ -8,6 +8,7 @@ import dev.dwellwise.job.ProblemBuilder;
 import dev.dwellwise.thermal.ComputeBudget;
 import dev.dwellwise.thermal.MaterialLibrary;
 import dev.dwellwise.thermal.ModelSelector;
+import dev.dwellwise.thermal.SlabModel;
 import dev.dwellwise.thermal.ThermalProblem;
 import java.util.List;
 import org.slf4j.Logger;
@@ -51,7 +52,8 @@ public final class Simulator {
         Job job = JobValidator.validated(raw, library, limits, prefix);
         String hash = CanonicalJson.sha256(job);
         ThermalProblem problem = new ProblemBuilder(library).build(job, budget);
-        ModelSelector.Selection selection = selector.solve(problem, job.model());
+        ModelSelector chosen = job.slabCells() == null ? selector : selector.withSlab(new SlabModel(job.slabCells()));
+        ModelSelector.Selection selection = chosen.solve(problem, job.model());
         List<CheckResult> checks = Checks.thermal(selection, job.limits());
         Provenance provenance = new Provenance(service, hash, selection.model().method(),
                 selection.model().tolerance(), selection.history().steps(), selection.history().evaluations());
