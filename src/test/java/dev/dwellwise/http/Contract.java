@@ -98,8 +98,8 @@ final class Contract {
      * schemas, which is most of their cost.
      */
     private static final class Validators {
-        static final OpenApiValidationFilter STRICT = new OpenApiValidationFilter(
-                OpenApiInteractionValidator.createForInlineApiSpecification(FOR_VALIDATOR).build());
+        static final OpenApiInteractionValidator STRICT_VALIDATOR = validator(FOR_VALIDATOR);
+        static final OpenApiValidationFilter STRICT = new OpenApiValidationFilter(STRICT_VALIDATOR);
         static final OpenApiValidationFilter RESPONSES_ONLY = new OpenApiValidationFilter(
                 OpenApiInteractionValidator.createForInlineApiSpecification(FOR_VALIDATOR)
                         .withLevelResolver(LevelResolver.create()
@@ -108,6 +108,16 @@ final class Contract {
         static final Map<String, Schema<?>> REFS = new ConcurrentHashMap<>();
         static final SchemaValidator SCHEMAS = new SchemaValidator(
                 new OpenAPIV3Parser().readContents(FOR_VALIDATOR, null, null).getOpenAPI(), new MessageResolver());
+    }
+
+    /** The validator behind {@link #strict()}, for checking a response without a server. */
+    static OpenApiInteractionValidator strictValidator() {
+        return Validators.STRICT_VALIDATOR;
+    }
+
+    /** A validator for any document text, with the library's default levels. */
+    static OpenApiInteractionValidator validator(String document) {
+        return OpenApiInteractionValidator.createForInlineApiSpecification(document).build();
     }
 
     /**

@@ -6,7 +6,9 @@ import static org.hamcrest.Matchers.hasItem;
 import static org.hamcrest.Matchers.not;
 import static org.hamcrest.Matchers.emptyOrNullString;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import com.atlassian.oai.validator.model.SimpleRequest;
 import com.atlassian.oai.validator.report.ValidationReport;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import io.restassured.response.Response;
@@ -48,8 +50,19 @@ class HttpBadInputTest {
         server.close();
     }
 
-    /** One bad request, what it must be answered with, and the field the answer must name (or null). */
-    record Case(String sentence, int status, String type, String field, Function<RequestSpecification, Response> send) {
+    /**
+     * One bad request, what it must be answered with, and the field the answer must name (or null).
+     * {@code job} is the body of a job the service refuses, and {@code contractRefuses} says whether
+     * the contract's request schema states the rule too (a bound, an enum, a required field) or only
+     * describes it (a rule across fields or against the material library).
+     */
+    record Case(String sentence, int status, String type, String field, Function<RequestSpecification, Response> send,
+                String job, boolean contractRefuses) {
+
+        Case(String sentence, int status, String type, String field, Function<RequestSpecification, Response> send) {
+            this(sentence, status, type, field, send, null, false);
+        }
+
         @Override
         public String toString() {
             return sentence;
@@ -69,7 +82,12 @@ class HttpBadInputTest {
     }
 
     private static Case invalid(String sentence, String field, ObjectNode job) {
-        return new Case(sentence, 422, INVALID, field, post(job));
+        return new Case(sentence, 422, INVALID, field, post(job), Jobs.text(job), true);
+    }
+
+    /** A job the service refuses by a rule the contract describes in words only. */
+    private static Case invalidBeyondSchema(String sentence, String field, ObjectNode job) {
+        return new Case(sentence, 422, INVALID, field, post(job), Jobs.text(job), false);
     }
 
     private static ObjectNode job() {
@@ -140,7 +158,7 @@ class HttpBadInputTest {
                         Jobs.with(job, "stages[0].until", Map.of())),
                 invalid("a hold without holdSeconds names stages[0].until.holdSeconds", "stages[0].until.holdSeconds",
                         Jobs.with(job, "stages[0].until", Map.of("holdAboveC", 170))),
-                invalid("an unknown material id names part.material", "part.material",
+                invalidBeyondSchema("an unknown material id names part.material", "part.material",
                         Jobs.with(job, "part.material", "unobtainium")),
                 invalid("a misspelt property is refused, naming it, not ignored", "part.emisivity",
                         Jobs.with(Jobs.without(job, "part.emissivity"), "part.emisivity", 0.9)),
@@ -162,16 +180,16 @@ class HttpBadInputTest {
                 invalid("a missing part names part", "part", Jobs.without(job, "part")),
                 invalid("layers together with material name part.layers", "part.layers",
                         Jobs.with(job, "part.layers", List.of(Map.of("material", "steel-1010", "thicknessMm", 1)))),
-                invalid("an air ramp on a stage that does not end after fixed seconds names airEndTemperatureC",
+                invalidBeyondSchema("an air ramp on a stage that does not end after fixed seconds names airEndTemperatureC",
                         "stages[1].airEndTemperatureC", Jobs.with(job, "stages[1].airEndTemperatureC", 20)),
-                invalid("a surroundings ramp without its start names surroundingsEndTemperatureC",
+                invalidBeyondSchema("a surroundings ramp without its start names surroundingsEndTemperatureC",
                         "stages[0].surroundingsEndTemperatureC",
                         Jobs.with(job, "stages[0].surroundingsEndTemperatureC", 200)),
                 invalid("a stage maxSeconds beyond 7 days names stages[1].maxSeconds", "stages[1].maxSeconds",
                         Jobs.with(job, "stages[1].maxSeconds", 8 * 86_400)),
                 invalid("a fixed stage time beyond 7 days names stages[0].until.seconds", "stages[0].until.seconds",
                         Jobs.with(job, "stages[0].until.seconds", 8 * 86_400)),
-                invalid("stages that may last beyond 40 days in all name stages", "stages",
+                invalidBeyondSchema("stages that may last beyond 40 days in all name stages", "stages",
                         Jobs.with(job, "stages", Collections.nCopies(7,
                                 Jobs.with(job, "stages[1].maxSeconds", 7 * 86_400).get("stages").get(1)))),
                 invalid("a negative convection coefficient names its field", "stages[0].convectionWPerM2K",
@@ -216,6 +234,25 @@ class HttpBadInputTest {
         }
         ValidationReport report = Contract.validateAgainst("Problem", answer.asString());
         assertFalse(report.hasErrors(), () -> "the body breaks the Problem schema: " + report.getMessages());
+    }
+
+    static Stream<Case> jobsTheContractRefuses() {
+        return cases().filter(Case::contractRefuses);
+    }
+
+    @Test
+    void theContractAdmitsTheValidJobTheCasesAreMadeFrom() {
+        ValidationReport report = Contract.strictValidator().validateRequest(SimpleRequest.Builder.post(SIMULATIONS)
+                .withContentType("application/json").withBody(Jobs.text(job())).build());
+        assertFalse(report.hasErrors(), () -> report.getMessages().toString());
+    }
+
+    @ParameterizedTest(name = "{0}; the contract's request schema refuses it too")
+    @MethodSource("jobsTheContractRefuses")
+    void theContractRefusesTheJobToo(Case c) {
+        ValidationReport report = Contract.strictValidator().validateRequest(SimpleRequest.Builder.post(SIMULATIONS)
+                .withContentType("application/json").withBody(c.job()).build());
+        assertTrue(report.hasErrors(), "the contract admits a job that the service refuses on " + c.field());
     }
 
     @ParameterizedTest(name = "{0}, with no stack trace or Java class name in the answer")
