@@ -19,7 +19,9 @@ import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 
 /**
@@ -43,6 +45,9 @@ final class Contract {
     static final String RESOURCE = "/openapi/dwellwise.yaml";
     private static final ObjectMapper YAML = new ObjectMapper(new YAMLFactory());
     private static final ObjectMapper JSON = new ObjectMapper();
+    /** The keys of a path item that are operations (the others are its summary, parameters, servers). */
+    private static final Set<String> METHODS = Set.of("get", "put", "post", "delete", "options", "head", "patch",
+            "trace");
 
     private static final String TEXT = read();
     private static final String FOR_VALIDATOR = adapt(TEXT);
@@ -70,7 +75,11 @@ final class Contract {
         Iterator<Map.Entry<String, JsonNode>> paths = document().get("paths").fields();
         while (paths.hasNext()) {
             Map.Entry<String, JsonNode> path = paths.next();
-            path.getValue().fieldNames().forEachRemaining(method -> out.add(method.toUpperCase() + " " + path.getKey()));
+            path.getValue().fieldNames().forEachRemaining(key -> {
+                if (METHODS.contains(key)) {
+                    out.add(key.toUpperCase(Locale.ROOT) + " " + path.getKey());
+                }
+            });
         }
         return out;
     }

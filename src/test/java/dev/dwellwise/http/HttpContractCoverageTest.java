@@ -69,11 +69,12 @@ class HttpContractCoverageTest {
         for (String operation : Contract.operations()) {
             String method = operation.substring(0, operation.indexOf(' '));
             String template = operation.substring(method.length() + 1);
-            JsonNode spec = paths.get(template).get(method.toLowerCase());
+            JsonNode spec = paths.get(template).get(method.toLowerCase(java.util.Locale.ROOT));
             RequestSpecification request = server.request(Contract.strict());
             String path = template;
             for (JsonNode parameter : spec.path("parameters")) {
                 if ("path".equals(parameter.path("in").asText())) {
+                    assertTrue(parameter.has("example"), () -> operation + ": give the path parameter an example");
                     path = path.replace("{" + parameter.get("name").asText() + "}", parameter.get("example").asText());
                 }
             }
