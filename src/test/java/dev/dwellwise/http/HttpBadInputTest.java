@@ -280,6 +280,14 @@ class HttpBadInputTest {
     }
 
     @Test
+    void aMethodNotAllowedAnswerNamesTheMethodsThePathOffers() {
+        server.request(Contract.responsesOnly()).delete(SIMULATIONS).then()
+                .statusCode(405).header("Allow", equalTo("POST"));
+        server.request(Contract.responsesOnly()).post("/v1/materials/steel-1010").then()
+                .statusCode(405).header("Allow", equalTo("GET"));
+    }
+
+    @Test
     void everyInvalidFieldIsReportedInOneAnswer() {
         ObjectNode job = Jobs.with(Jobs.with(job(), "part.thicknessMm", -1), "part.emissivity", 2);
         job = Jobs.with(job, "stages[1].until", Map.of());
