@@ -117,7 +117,9 @@ class HttpBadInputTest {
                         r -> r.contentType("application/xml").body("<job/>").post(SIMULATIONS)),
                 new Case("a body over 1 MiB is a 413 body-too-large problem", 413,
                         "urn:dwellwise:problem:body-too-large", null,
-                        post("{\"part\": {\"material\": \"" + "x".repeat(1_100_000) + "\"}}")),
+                        r -> r.config(TestServer.EXPECT_CONTINUE).contentType("application/json")
+                                .body("{\"part\": {\"material\": \"" + "x".repeat(1_100_000) + "\"}}")
+                                .post(SIMULATIONS)),
                 new Case("Accept: application/xml is a 406 not-acceptable problem", 406,
                         "urn:dwellwise:problem:not-acceptable", null,
                         r -> r.contentType("application/json").accept("application/xml").body(Jobs.text(job))

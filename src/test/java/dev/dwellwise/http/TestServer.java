@@ -4,6 +4,7 @@ import static io.restassured.RestAssured.given;
 
 import io.javalin.Javalin;
 import io.restassured.config.EncoderConfig;
+import io.restassured.config.HttpClientConfig;
 import io.restassured.config.RestAssuredConfig;
 import io.restassured.filter.Filter;
 import io.restassured.specification.RequestSpecification;
@@ -22,6 +23,14 @@ final class TestServer implements AutoCloseable {
     private static final RestAssuredConfig CONFIG = RestAssuredConfig.config().encoderConfig(
             EncoderConfig.encoderConfig().defaultContentCharset(StandardCharsets.UTF_8)
                     .appendDefaultContentCharsetToContentTypeIfUndefined(false));
+
+    /**
+     * As {@link #CONFIG}, and the client sends {@code Expect: 100-continue} and waits before it sends
+     * the body: a server that refuses a body on its declared length answers before reading it, so a
+     * client that sent the whole body at once would find the connection closed under it.
+     */
+    static final RestAssuredConfig EXPECT_CONTINUE = CONFIG.httpClient(
+            HttpClientConfig.httpClientConfig().setParam("http.protocol.expect-continue", true));
 
     private final Javalin app;
 
