@@ -74,8 +74,10 @@ public final class App {
                             e.getMessage() + (e.limit() == ComputeLimitExceededException.Limit.SAMPLES
                                     ? "; raise output.sampleSeconds or set output.series to false"
                                     : "; shorten the stages or give them smaller maxSeconds")))));
-            cfg.routes.exception(HttpResponseException.class, (e, ctx) -> problems.write(ctx,
-                    fromStatus(e.getStatus()), e.getMessage(), List.of()));
+            cfg.routes.exception(HttpResponseException.class, (e, ctx) -> {
+                allowHeader(e, ctx);
+                problems.write(ctx, fromStatus(e.getStatus()), e.getMessage(), List.of());
+            });
             cfg.routes.exception(JsonProcessingException.class, (e, ctx) -> problems.write(ctx,
                     ProblemType.UNREADABLE_BODY, "malformed JSON", List.of()));
             cfg.routes.exception(Exception.class, (e, ctx) -> {
@@ -104,6 +106,14 @@ public final class App {
             return endpoint == null ? ctx.path() : endpoint.path;
         } catch (RuntimeException e) {
             return ctx.path();
+        }
+    }
+
+    /** A 405 must name the methods the path offers (RFC 9110, 15.5.6); Javalin puts them in the details. */
+    private static void allowHeader(HttpResponseException e, Context ctx) {
+        String methods = e.getDetails().getOrDefault("availableMethods", e.getDetails().get("Available methods"));
+        if (e.getStatus() == 405 && methods != null) {
+            ctx.header("Allow", methods);
         }
     }
 

@@ -35,12 +35,9 @@ final class JsonBodies {
             }
             return value;
         } catch (StreamConstraintsException e) {
-            throw new ApiException(ProblemType.UNREADABLE_BODY, "the JSON is nested too deeply or holds a value "
-                    + "that is too long");
+            throw tooComplex();
         } catch (StreamReadException e) {
-            throw new ApiException(ProblemType.UNREADABLE_BODY, "malformed JSON"
-                    + (e.getLocation() == null ? "" : " at line " + e.getLocation().getLineNr() + ", column "
-                    + e.getLocation().getColumnNr()));
+            throw malformed(e);
         } catch (PropertyBindingException e) {
             throw invalid(e, "unknown property '" + e.getPropertyName() + "'"
                     + (e.getKnownPropertyIds() == null ? "" : "; known here: " + known(e)));
@@ -50,12 +47,30 @@ final class JsonBodies {
             }
             throw invalid(e, "expected " + describe(e.getTargetType()));
         } catch (JsonMappingException e) {
+            // Jackson wraps a syntax error met inside a nested object with the path to it: still unreadable
+            if (e.getCause() instanceof StreamConstraintsException) {
+                throw tooComplex();
+            }
+            if (e.getCause() instanceof StreamReadException cause) {
+                throw malformed(cause);
+            }
             throw invalid(e, "invalid value");
         } catch (JsonProcessingException e) {
             throw new ApiException(ProblemType.UNREADABLE_BODY, "malformed JSON");
         } catch (IOException e) {
             throw new ApiException(ProblemType.UNREADABLE_BODY, "the request body could not be read");
         }
+    }
+
+    private static ApiException malformed(StreamReadException e) {
+        return new ApiException(ProblemType.UNREADABLE_BODY, "malformed JSON"
+                + (e.getLocation() == null ? "" : " at line " + e.getLocation().getLineNr() + ", column "
+                + e.getLocation().getColumnNr()));
+    }
+
+    private static ApiException tooComplex() {
+        return new ApiException(ProblemType.UNREADABLE_BODY, "the JSON is nested too deeply or holds a value "
+                + "that is too long");
     }
 
     private static ApiException invalid(JsonMappingException e, String message) {
