@@ -12,6 +12,7 @@ import static org.hamcrest.Matchers.not;
 import static org.hamcrest.Matchers.oneOf;
 import static org.hamcrest.Matchers.startsWith;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.atlassian.oai.validator.restassured.OpenApiValidationFilter;
 import com.fasterxml.jackson.databind.JsonNode;
@@ -63,7 +64,7 @@ class HttpSimulationsTest {
                 .statusCode(200)
                 .contentType("application/json")
                 .body("verdict", oneOf("pass", "fail"))
-                .body("model.used", equalTo("lumped"))
+                .body("model.used", oneOf("lumped", "slab"))
                 .body("stages", hasSize(job.get("stages").size()))
                 .body("stages.ended", everyItem(oneOf("duration", "reached", "hold-complete", "max-seconds")))
                 .body("checks.name", hasItem("model-validity"))
@@ -98,6 +99,18 @@ class HttpSimulationsTest {
         for (int i = 0; i < time.size(); i++) {
             assertEquals(time.get(i).asDouble(), Double.parseDouble(lines.get(i + 1).split(",")[0]), "row " + (i + 1));
         }
+    }
+
+    @Test
+    void acceptImageSvgAnswersAChartOfTheSameHistory() {
+        ObjectNode job = Jobs.small();
+        Response svg = server.request(contract).contentType("application/json").accept("image/svg+xml")
+                .body(Jobs.text(job)).post("/v1/simulations");
+        svg.then().statusCode(200).contentType(startsWith("image/svg+xml"));
+        String body = svg.asString();
+        assertTrue(body.startsWith("<svg xmlns=\"http://www.w3.org/2000/svg\""), body.substring(0, 60));
+        assertTrue(body.contains(">oven<") && body.contains(">cooling<"), "a band per stage");
+        assertTrue(body.contains("max part 200 °C") && body.contains("handling 50 °C"), "the limit lines");
     }
 
     @Test

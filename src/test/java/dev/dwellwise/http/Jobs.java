@@ -18,9 +18,9 @@ final class Jobs {
     private Jobs() {
     }
 
-    /** The job of a bundled example, as the example file holds it. */
+    /** The job of a bundled example: the example file is the job, as a client would post it. */
     static ObjectNode example(String id) {
-        return (ObjectNode) parse(TestServer.resource("/examples/" + id + ".json")).get("job");
+        return (ObjectNode) parse(TestServer.resource("/examples/" + id + ".json"));
     }
 
     /** A small valid job: a thin steel panel, one timed oven stage and a cooling stage. */
