@@ -5,7 +5,6 @@ import dev.dwellwise.cure.CureComputationException;
 import dev.dwellwise.job.FieldError;
 import dev.dwellwise.job.InvalidJobException;
 import dev.dwellwise.thermal.ComputeLimitExceededException;
-import dev.dwellwise.thermal.ModelUnavailableException;
 import io.javalin.Javalin;
 import io.javalin.http.Context;
 import io.javalin.http.HttpResponseException;
@@ -73,8 +72,6 @@ public final class App {
                     e.errors()));
             cfg.routes.exception(InvalidJobException.class, (e, ctx) -> problems.write(ctx, ProblemType.INVALID_JOB,
                     summary(e.errors()), e.errors()));
-            cfg.routes.exception(ModelUnavailableException.class, (e, ctx) -> problems.write(ctx,
-                    ProblemType.INVALID_JOB, e.getMessage(), List.of(new FieldError(modelField(ctx), e.getMessage()))));
             cfg.routes.exception(ComputeLimitExceededException.class, (e, ctx) -> problems.write(ctx,
                     ProblemType.COMPUTE_LIMIT, e.getMessage(), List.of(new FieldError(limitField(ctx, e),
                             e.getMessage() + (e.limit() == ComputeLimitExceededException.Limit.SAMPLES
@@ -83,8 +80,10 @@ public final class App {
             cfg.routes.exception(CureComputationException.class, (e, ctx) -> problems.write(ctx,
                     ProblemType.COMPUTE_LIMIT, e.getMessage(), List.of(new FieldError(jobPrefix(ctx) + "cure",
                             e.getMessage() + "; check the cure spec's parameters against the coating's data"))));
-            cfg.routes.exception(HttpResponseException.class, (e, ctx) -> problems.write(ctx,
-                    fromStatus(e.getStatus()), e.getMessage(), List.of()));
+            cfg.routes.exception(HttpResponseException.class, (e, ctx) -> {
+                allowHeader(e, ctx);
+                problems.write(ctx, fromStatus(e.getStatus()), e.getMessage(), List.of());
+            });
             cfg.routes.exception(JsonProcessingException.class, (e, ctx) -> problems.write(ctx,
                     ProblemType.UNREADABLE_BODY, "malformed JSON", List.of()));
             cfg.routes.exception(Exception.class, (e, ctx) -> {
@@ -116,6 +115,14 @@ public final class App {
         }
     }
 
+    /** A 405 must name the methods the path offers (RFC 9110, 15.5.6); Javalin puts them in the details. */
+    private static void allowHeader(HttpResponseException e, Context ctx) {
+        String methods = e.getDetails().getOrDefault("availableMethods", e.getDetails().get("Available methods"));
+        if (e.getStatus() == 405 && methods != null) {
+            ctx.header("Allow", methods);
+        }
+    }
+
     private static String summary(List<FieldError> errors) {
         FieldError first = errors.get(0);
         return first.field() + ": " + first.message()
@@ -126,10 +133,6 @@ public final class App {
     private static String jobPrefix(Context ctx) {
         String prefix = ctx.attribute(SimulationRoutes.JOB_PREFIX);
         return prefix == null ? "" : prefix;
-    }
-
-    private static String modelField(Context ctx) {
-        return jobPrefix(ctx) + "model";
     }
 
     private static String limitField(Context ctx, ComputeLimitExceededException e) {

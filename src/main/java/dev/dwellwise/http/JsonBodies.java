@@ -40,12 +40,9 @@ final class JsonBodies {
             }
             return value;
         } catch (StreamConstraintsException e) {
-            throw new ApiException(ProblemType.UNREADABLE_BODY, "the JSON is nested too deeply or holds a value "
-                    + "that is too long");
+            throw tooComplex();
         } catch (StreamReadException e) {
-            throw new ApiException(ProblemType.UNREADABLE_BODY, "malformed JSON"
-                    + (e.getLocation() == null ? "" : " at line " + e.getLocation().getLineNr() + ", column "
-                    + e.getLocation().getColumnNr()));
+            throw malformed(e);
         } catch (PropertyBindingException e) {
             throw invalid(e, "unknown property '" + e.getPropertyName() + "'"
                     + (e.getKnownPropertyIds() == null ? "" : "; known here: " + known(e)));
@@ -57,6 +54,13 @@ final class JsonBodies {
             }
             throw invalid(e, "expected " + describe(e.getTargetType()));
         } catch (JsonMappingException e) {
+            // Jackson wraps a syntax error met inside a nested object with the path to it: still unreadable
+            if (e.getCause() instanceof StreamConstraintsException) {
+                throw tooComplex();
+            }
+            if (e.getCause() instanceof StreamReadException cause) {
+                throw malformed(cause);
+            }
             throw invalid(e, "invalid value");
         } catch (JsonProcessingException e) {
             throw new ApiException(ProblemType.UNREADABLE_BODY, "malformed JSON");
@@ -77,10 +81,23 @@ final class JsonBodies {
             return invalid(e, "invalid value");
         }
         String field = WireJson.path(e.getPath()) + "." + info.property();
-        String names = Arrays.stream(subtypes.value()).map(JsonSubTypes.Type::name).collect(Collectors.joining(", "));
-        String message = (e.getTypeId() == null ? "is required" : "unknown " + info.property() + " '" + e.getTypeId()
-                + "'") + "; one of " + names;
-        return new ApiException(ProblemType.INVALID_JOB, field + ": " + message, List.of(new FieldError(field, message)));
+        String names = Arrays.stream(subtypes.value()).map(JsonSubTypes.Type::name)
+                .collect(Collectors.joining(", "));
+        String message = (e.getTypeId() == null ? "is required"
+                : "unknown " + info.property() + " '" + e.getTypeId() + "'") + "; one of " + names;
+        return new ApiException(ProblemType.INVALID_JOB, field + ": " + message,
+                List.of(new FieldError(field, message)));
+    }
+
+    private static ApiException malformed(StreamReadException e) {
+        return new ApiException(ProblemType.UNREADABLE_BODY, "malformed JSON"
+                + (e.getLocation() == null ? "" : " at line " + e.getLocation().getLineNr() + ", column "
+                + e.getLocation().getColumnNr()));
+    }
+
+    private static ApiException tooComplex() {
+        return new ApiException(ProblemType.UNREADABLE_BODY, "the JSON is nested too deeply or holds a value "
+                + "that is too long");
     }
 
     private static ApiException invalid(JsonMappingException e, String message) {

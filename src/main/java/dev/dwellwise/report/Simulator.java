@@ -11,6 +11,7 @@ import dev.dwellwise.job.ReleaseRequest;
 import dev.dwellwise.thermal.ComputeBudget;
 import dev.dwellwise.thermal.MaterialLibrary;
 import dev.dwellwise.thermal.ModelSelector;
+import dev.dwellwise.thermal.SlabModel;
 import dev.dwellwise.thermal.ThermalProblem;
 import java.util.ArrayList;
 import java.util.List;
@@ -83,7 +84,9 @@ public final class Simulator {
         long started = System.nanoTime();
         String hash = CanonicalJson.sha256(hashed);
         ThermalProblem problem = new ProblemBuilder(library).build(solved, budget);
-        ModelSelector.Selection selection = selector.solve(problem, solved.model());
+        ModelSelector chosen = solved.slabCells() == null ? selector
+                : selector.withSlab(new SlabModel(solved.slabCells()));
+        ModelSelector.Selection selection = chosen.solve(problem, solved.model());
         List<CheckResult> checks = new ArrayList<>(Checks.thermal(selection, solved.limits()));
         CureReport cure = null;
         if (solved.cure() != null) {

@@ -19,8 +19,8 @@ import dev.dwellwise.thermal.ComputeBudget;
 import dev.dwellwise.thermal.LumpedModel;
 import dev.dwellwise.thermal.MaterialLibrary;
 import dev.dwellwise.thermal.ModelSelector;
+import dev.dwellwise.thermal.SlabModel;
 import io.javalin.Javalin;
-import java.util.Optional;
 import java.util.function.UnaryOperator;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.AfterAll;
@@ -122,7 +122,7 @@ class CureValidationHttpTest {
     void aCureFigureBeyondItsBudgetIsAComputeLimitProblemNamingTheCure() {
         Services bundled = Services.bundled();
         Simulator stingy = new Simulator(MaterialLibrary.bundled(),
-                new ModelSelector(new LumpedModel(), Optional.empty()), JobLimits.standard(), ComputeBudget.standard(),
+                new ModelSelector(new LumpedModel(), new SlabModel()), JobLimits.standard(), ComputeBudget.standard(),
                 new CureBudget(50), "dwellwise test");
         Services services = new Services(stingy, bundled.materials(), ExampleLibrary.bundled(bundled.mapper()),
                 bundled.mapper(), bundled.version(), bundled.openApi());

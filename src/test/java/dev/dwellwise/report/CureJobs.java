@@ -16,10 +16,10 @@ import dev.dwellwise.thermal.ComputeBudget;
 import dev.dwellwise.thermal.LumpedModel;
 import dev.dwellwise.thermal.MaterialLibrary;
 import dev.dwellwise.thermal.ModelSelector;
+import dev.dwellwise.thermal.SlabModel;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -50,7 +50,7 @@ final class CureJobs {
     }
 
     static Simulator simulator(CureBudget budget) {
-        return new Simulator(MaterialLibrary.bundled(), new ModelSelector(new LumpedModel(), Optional.empty()),
+        return new Simulator(MaterialLibrary.bundled(), new ModelSelector(new LumpedModel(), new SlabModel()),
                 JobLimits.standard(), ComputeBudget.standard(), budget, "dwellwise test");
     }
 
