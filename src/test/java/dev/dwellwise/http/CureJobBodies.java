@@ -1,19 +1,14 @@
 package dev.dwellwise.http;
 
-import com.fasterxml.jackson.core.JsonPointer;
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.io.UncheckedIOException;
 
 /**
  * Request bodies for the HTTP tests of the cure and the release call: a job that cures (a powder-
- * coated 2 mm steel panel in a 200 °C convection oven, then a cooling tunnel; invented) and small
- * edits of it by JSON pointer.
+ * coated 2 mm steel panel in a 200 °C convection oven, then a cooling tunnel; invented), another rate
+ * law for it, and the release-check body around a job.
  */
 final class CureJobBodies {
-
-    static final ObjectMapper MAPPER = new ObjectMapper();
 
     static final String CURING_JOB = """
             {
@@ -49,36 +44,19 @@ final class CureJobBodies {
     }
 
     static ObjectNode curingJob() {
-        return (ObjectNode) parse(CURING_JOB);
+        return (ObjectNode) Jobs.parse(CURING_JOB);
     }
 
-    static JsonNode parse(String json) {
-        try {
-            return MAPPER.readTree(json);
-        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
-            throw new UncheckedIOException(e);
-        }
-    }
-
-    /** Sets the value at {@code pointer} (its parent must exist), replacing what is there. */
-    static ObjectNode set(ObjectNode root, String pointer, Object value) {
-        JsonPointer p = JsonPointer.compile(pointer);
-        JsonNode node = value instanceof JsonNode n ? n : MAPPER.valueToTree(value);
-        ((ObjectNode) root.at(p.head())).set(p.last().getMatchingProperty(), node);
-        return root;
-    }
-
-    static ObjectNode remove(ObjectNode root, String pointer) {
-        JsonPointer p = JsonPointer.compile(pointer);
-        ((ObjectNode) root.at(p.head())).remove(p.last().getMatchingProperty());
-        return root;
+    /** The curing job with Kamal–Sourour kinetics instead of nth-order. */
+    static ObjectNode autocatalytic() {
+        return Jobs.with(curingJob(), "cure.kinetics", Jobs.parse(KAMAL_SOUROUR));
     }
 
     /** The release-check body for {@code job}. */
     static String release(String batchId, JsonNode job) {
-        ObjectNode body = MAPPER.createObjectNode();
+        ObjectNode body = Jobs.JSON.createObjectNode();
         body.put("batchId", batchId);
         body.set("job", job);
-        return body.toString();
+        return Jobs.text(body);
     }
 }

@@ -1,11 +1,10 @@
 package dev.dwellwise.http;
 
+import static dev.dwellwise.http.CureJobBodies.autocatalytic;
 import static dev.dwellwise.http.CureJobBodies.curingJob;
-import static dev.dwellwise.http.CureJobBodies.parse;
 import static dev.dwellwise.http.CureJobBodies.release;
-import static dev.dwellwise.http.CureJobBodies.remove;
-import static dev.dwellwise.http.CureJobBodies.set;
-import static io.restassured.RestAssured.given;
+import static dev.dwellwise.http.Jobs.with;
+import static dev.dwellwise.http.Jobs.without;
 import static org.hamcrest.Matchers.equalTo;
 import static org.hamcrest.Matchers.hasItem;
 import static org.hamcrest.Matchers.notNullValue;
@@ -20,8 +19,6 @@ import dev.dwellwise.thermal.LumpedModel;
 import dev.dwellwise.thermal.MaterialLibrary;
 import dev.dwellwise.thermal.ModelSelector;
 import dev.dwellwise.thermal.SlabModel;
-import io.javalin.Javalin;
-import java.util.function.UnaryOperator;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
@@ -30,69 +27,73 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 
-/** An invalid cure is a 422 naming the field, on a real port; in a release check the field is under {@code job.}. */
+/**
+ * An invalid cure is a 422 naming the field, on a real port; in a release check the field is under
+ * {@code job.}. The requests break the contract on purpose, so only the answers are validated against it.
+ */
 class CureValidationHttpTest {
 
-    private static Javalin app;
+    private static TestServer server;
 
     @BeforeAll
     static void start() {
-        app = App.create(ServiceConfig.defaults().withPort(0), Services.bundled()).start();
+        server = TestServer.start();
     }
 
     @AfterAll
     static void stop() {
-        app.stop();
+        server.close();
     }
 
-    private static Arguments bad(String field, UnaryOperator<ObjectNode> edit) {
-        return Arguments.of(field, edit);
+    /** The field the answer must name, and the job that is wrong there. */
+    private static Arguments badJob(String field, ObjectNode job) {
+        return Arguments.of(field, job);
     }
 
-    private static ObjectNode kamalSourour(ObjectNode job) {
-        return set(job, "/cure/kinetics", parse(CureJobBodies.KAMAL_SOUROUR));
+    /** The curing job with {@code value} at {@code field}, which the answer must then name. */
+    private static Arguments bad(String field, Object value) {
+        return badJob(field, with(curingJob(), field, value));
     }
 
     static Stream<Arguments> badCures() {
         return Stream.of(
-                bad("cure.kinetics.model", j -> set(j, "/cure/kinetics/model", "first-order")),
-                bad("cure.kinetics.model", j -> remove(j, "/cure/kinetics/model")),
-                bad("cure.kinetics.activationEnergyKJPerMol", j -> set(j, "/cure/kinetics/activationEnergyKJPerMol", -80)),
-                bad("cure.equivalentTime.activationEnergyKJPerMol",
-                        j -> set(j, "/cure/equivalentTime/activationEnergyKJPerMol", -1)),
-                bad("cure.kinetics.order", j -> set(j, "/cure/kinetics/order", -0.5)),
-                bad("cure.kinetics.minDegree", j -> set(j, "/cure/kinetics/minDegree", 1.2)),
-                bad("cure.kinetics.initialDegree", j -> set(j, "/cure/kinetics/initialDegree", -0.1)),
+                bad("cure.kinetics.model", "first-order"),
+                badJob("cure.kinetics.model", without(curingJob(), "cure.kinetics.model")),
+                bad("cure.kinetics.activationEnergyKJPerMol", -80),
+                bad("cure.equivalentTime.activationEnergyKJPerMol", -1),
+                bad("cure.kinetics.order", -0.5),
+                bad("cure.kinetics.minDegree", 1.2),
+                bad("cure.kinetics.initialDegree", -0.1),
                 // order 1.5 only approaches full cure: a minimum of 1 could never be met
-                bad("cure.kinetics.minDegree", j -> set(j, "/cure/kinetics/minDegree", 1)),
-                bad("cure.timeAbove.maxSeconds", j -> set(j, "/cure/timeAbove/maxSeconds", 300)),
-                bad("cure.equivalentTime.maxSeconds", j -> set(j, "/cure/equivalentTime/maxSeconds", 100)),
-                bad("cure.equivalentTime.referenceC", j -> set(j, "/cure/equivalentTime/referenceC", -273.15)),
-                bad("cure.equivalentTime.referenceC", j -> set(j, "/cure/equivalentTime/referenceC", -300)),
-                bad("cure.kinetics.preExponentialPerS", j -> set(j, "/cure/kinetics/preExponentialPerS", 0)),
-                bad("cure.kinetics.preExponentialPerS", j -> set(j, "/cure/kinetics/preExponentialPerS", -2.7e8)),
-                bad("cure.kinetics.glassTransition.lambda", j -> set(j, "/cure/kinetics/glassTransition/lambda", 0)),
-                bad("cure.kinetics.glassTransition.lambda", j -> set(j, "/cure/kinetics/glassTransition/lambda", 1.5)),
-                bad("cure.kinetics.glassTransition.minC", j -> set(j, "/cure/kinetics/glassTransition/minC", 120)),
-                bad("cure.kinetics.glassTransition.tgFullC", j -> set(j, "/cure/kinetics/glassTransition/tgFullC", 40)),
-                bad("cure.kinetics.m", j -> set(j, "/cure/kinetics/m", 0.5)),
-                bad("cure.timeAboveC", j -> set(j, "/cure/timeAboveC", 180)),
-                bad("cure.timeAbove.minSeconds", j -> remove(j, "/cure/timeAbove/minSeconds")),
-                bad("cure.timeAbove.temperatureC", j -> set(j, "/cure/timeAbove/temperatureC", "180")),
-                bad("cure", j -> set(j, "/cure", CureJobBodies.MAPPER.createObjectNode())),
-                bad("cure.kinetics.k2PreExponentialPerS",
-                        j -> set(kamalSourour(j), "/cure/kinetics/k2PreExponentialPerS", 0)),
-                bad("cure.kinetics.k1ActivationEnergyKJPerMol",
-                        j -> set(kamalSourour(j), "/cure/kinetics/k1ActivationEnergyKJPerMol", -5)),
-                bad("cure.kinetics.m", j -> set(kamalSourour(j), "/cure/kinetics/m", -1)),
-                bad("cure.kinetics.minDegree", j -> set(set(kamalSourour(j), "/cure/kinetics/n", 1.2),
-                        "/cure/kinetics/minDegree", 1)));
+                bad("cure.kinetics.minDegree", 1),
+                bad("cure.timeAbove.maxSeconds", 300),
+                bad("cure.equivalentTime.maxSeconds", 100),
+                bad("cure.equivalentTime.referenceC", -273.15),
+                bad("cure.equivalentTime.referenceC", -300),
+                bad("cure.kinetics.preExponentialPerS", 0),
+                bad("cure.kinetics.preExponentialPerS", -2.7e8),
+                bad("cure.kinetics.glassTransition.lambda", 0),
+                bad("cure.kinetics.glassTransition.lambda", 1.5),
+                bad("cure.kinetics.glassTransition.minC", 120),
+                bad("cure.kinetics.glassTransition.tgFullC", 40),
+                bad("cure.kinetics.m", 0.5),
+                bad("cure.timeAboveC", 180),
+                badJob("cure.timeAbove.minSeconds", without(curingJob(), "cure.timeAbove.minSeconds")),
+                bad("cure.timeAbove.temperatureC", "180"),
+                bad("cure", Jobs.JSON.createObjectNode()),
+                badJob("cure.kinetics.k2PreExponentialPerS",
+                        with(autocatalytic(), "cure.kinetics.k2PreExponentialPerS", 0)),
+                badJob("cure.kinetics.k1ActivationEnergyKJPerMol",
+                        with(autocatalytic(), "cure.kinetics.k1ActivationEnergyKJPerMol", -5)),
+                badJob("cure.kinetics.m", with(autocatalytic(), "cure.kinetics.m", -1)),
+                badJob("cure.kinetics.minDegree", with(with(autocatalytic(), "cure.kinetics.n", 1.2),
+                        "cure.kinetics.minDegree", 1)));
     }
 
     @ParameterizedTest(name = "{0}")
     @MethodSource("badCures")
-    void anInvalidCureIsA422NamingTheField(String field, UnaryOperator<ObjectNode> edit) {
-        given().port(app.port()).contentType("application/json").body(edit.apply(curingJob()).toString())
+    void anInvalidCureIsA422NamingTheField(String field, ObjectNode job) {
+        server.request(Contract.responsesOnly()).contentType("application/json").body(Jobs.text(job))
                 .when().post("/v1/simulations")
                 .then().statusCode(422).contentType("application/problem+json")
                 .body("type", equalTo("urn:dwellwise:problem:invalid-job"))
@@ -101,8 +102,8 @@ class CureValidationHttpTest {
 
     @ParameterizedTest(name = "job.{0}")
     @MethodSource("badCures")
-    void anInvalidCureInAReleaseCheckIsNamedUnderJob(String field, UnaryOperator<ObjectNode> edit) {
-        given().port(app.port()).contentType("application/json").body(release("B-1", edit.apply(curingJob())))
+    void anInvalidCureInAReleaseCheckIsNamedUnderJob(String field, ObjectNode job) {
+        server.request(Contract.responsesOnly()).contentType("application/json").body(release("B-1", job))
                 .when().post("/v1/release-checks")
                 .then().statusCode(422).contentType("application/problem+json")
                 .body("type", equalTo("urn:dwellwise:problem:invalid-job"))
@@ -111,7 +112,7 @@ class CureValidationHttpTest {
 
     @Test
     void aKamalSourourCureIsComputedAndJudged() {
-        given().port(app.port()).contentType("application/json").body(kamalSourour(curingJob()).toString())
+        server.request(Contract.strict()).contentType("application/json").body(Jobs.text(autocatalytic()))
                 .when().post("/v1/simulations")
                 .then().statusCode(200).contentType("application/json")
                 .body("cure.coldest.degree", notNullValue())
@@ -126,15 +127,12 @@ class CureValidationHttpTest {
                 new CureBudget(50), "dwellwise test");
         Services services = new Services(stingy, bundled.materials(), ExampleLibrary.bundled(bundled.mapper()),
                 bundled.mapper(), bundled.version(), bundled.openApi());
-        Javalin limited = App.create(ServiceConfig.defaults().withPort(0), services).start();
-        try {
-            given().port(limited.port()).contentType("application/json").body(release("B-1", curingJob()))
+        try (TestServer limited = TestServer.start(services)) {
+            limited.request(Contract.strict()).contentType("application/json").body(release("B-1", curingJob()))
                     .when().post("/v1/release-checks")
                     .then().statusCode(422).contentType("application/problem+json")
                     .body("type", equalTo("urn:dwellwise:problem:compute-limit"))
                     .body("errors.field", hasItem("job.cure"));
-        } finally {
-            limited.stop();
         }
     }
 }

@@ -1,11 +1,10 @@
 package dev.dwellwise.http;
 
 import static dev.dwellwise.http.CureJobBodies.curingJob;
-import static dev.dwellwise.http.CureJobBodies.parse;
 import static dev.dwellwise.http.CureJobBodies.release;
-import static dev.dwellwise.http.CureJobBodies.remove;
-import static dev.dwellwise.http.CureJobBodies.set;
-import static io.restassured.RestAssured.given;
+import static dev.dwellwise.http.Jobs.parse;
+import static dev.dwellwise.http.Jobs.with;
+import static dev.dwellwise.http.Jobs.without;
 import static org.hamcrest.Matchers.containsString;
 import static org.hamcrest.Matchers.empty;
 import static org.hamcrest.Matchers.equalTo;
@@ -20,17 +19,20 @@ import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.atlassian.oai.validator.restassured.OpenApiValidationFilter;
 import dev.dwellwise.report.Cautions;
-import io.javalin.Javalin;
 import io.restassured.response.ValidatableResponse;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
-/** {@code POST /v1/release-checks} on a real port: the MES's release question. */
+/**
+ * {@code POST /v1/release-checks} on a real port: the MES's release question. Valid requests and
+ * their answers are validated against the contract; for requests wrong on purpose, the answers.
+ */
 class ReleaseChecksHttpTest {
 
-    private static Javalin app;
+    private static TestServer server;
 
     /**
      * A batch that fails five ways at once: a preheat that never reaches its target (120 C air, 150 C wanted), a
@@ -53,17 +55,27 @@ class ReleaseChecksHttpTest {
 
     @BeforeAll
     static void start() {
-        app = App.create(ServiceConfig.defaults().withPort(0), Services.bundled()).start();
+        server = TestServer.start();
     }
 
     @AfterAll
     static void stop() {
-        app.stop();
+        server.close();
     }
 
-    private static ValidatableResponse post(String body) {
-        return given().port(app.port()).contentType("application/json").body(body)
+    private static ValidatableResponse post(String body, OpenApiValidationFilter contract) {
+        return server.request(contract).contentType("application/json").body(body)
                 .when().post("/v1/release-checks").then();
+    }
+
+    /** A valid request: it and its answer are checked against the contract. */
+    private static ValidatableResponse post(String body) {
+        return post(body, Contract.strict());
+    }
+
+    /** A request wrong on purpose: only its answer is checked against the contract. */
+    private static ValidatableResponse postInvalid(String body) {
+        return post(body, Contract.responsesOnly());
     }
 
     @Test
@@ -97,18 +109,17 @@ class ReleaseChecksHttpTest {
     @Test
     void theSameBodyGetsAByteIdenticalAnswer() {
         String body = release("B-8", parse(FAILING_JOB));
-        byte[] first = given().port(app.port()).contentType("application/json").body(body)
-                .post("/v1/release-checks").asByteArray();
-        byte[] second = given().port(app.port()).contentType("application/json").body(body)
-                .post("/v1/release-checks").asByteArray();
+        byte[] first = post(body).statusCode(200).extract().asByteArray();
+        byte[] second = post(body).statusCode(200).extract().asByteArray();
         assertArrayEquals(first, second);
     }
 
     @Test
     void theInputHashIsTheHashOfTheJobAsSentWhateverTheBatch() {
         // The release solve drops the series internally; the hash is still that of the job with its output asked for.
-        String simulated = given().port(app.port()).contentType("application/json").body(CureJobBodies.CURING_JOB)
-                .post("/v1/simulations").then().statusCode(200).extract().path("provenance.inputSha256");
+        String simulated = server.request(Contract.strict()).contentType("application/json")
+                .body(CureJobBodies.CURING_JOB).post("/v1/simulations").then().statusCode(200)
+                .extract().path("provenance.inputSha256");
         String released = post(release("B-9", curingJob())).statusCode(200).extract().path("inputSha256");
         String otherBatch = post(release("B-10", curingJob())).statusCode(200).extract().path("inputSha256");
         assertEquals(simulated, released);
@@ -117,20 +128,20 @@ class ReleaseChecksHttpTest {
 
     @Test
     void aJobErrorIsNamedUnderJob() {
-        post(release("B-11", remove(curingJob(), "/stages/0/until")))
+        postInvalid(release("B-11", without(curingJob(), "stages[0].until")))
                 .statusCode(422).contentType("application/problem+json")
                 .body("type", equalTo("urn:dwellwise:problem:invalid-job"))
                 .body("errors.field", hasItem("job.stages[0].until"));
-        ObjectNode misspelt = set(curingJob(), "/stages/1/until/partBelow", 45);
-        post(release("B-11", misspelt))
+        ObjectNode misspelt = with(curingJob(), "stages[1].until.partBelow", 45);
+        postInvalid(release("B-11", misspelt))
                 .statusCode(422).body("errors.field", hasItem("job.stages[1].until.partBelow"));
     }
 
     @Test
     void aMissingBatchIdIsNamedAlongWithTheJobsErrors() {
-        ObjectNode body = (ObjectNode) parse(release("x", remove(curingJob(), "/part/emissivity")));
+        ObjectNode body = (ObjectNode) parse(release("x", without(curingJob(), "part.emissivity")));
         body.remove("batchId");
-        post(body.toString())
+        postInvalid(Jobs.text(body))
                 .statusCode(422).contentType("application/problem+json")
                 .body("type", equalTo("urn:dwellwise:problem:invalid-job"))
                 .body("errors.field", hasItem("batchId"))
@@ -139,22 +150,22 @@ class ReleaseChecksHttpTest {
 
     @Test
     void aBatchIdOutsideTheSafeCharactersOrTooLongIsRefused() {
-        post(release("B 1; drop", curingJob())).statusCode(422).body("errors.field", hasItem("batchId"));
-        post(release("", curingJob())).statusCode(422).body("errors.field", hasItem("batchId"));
-        post(release("B".repeat(129), curingJob())).statusCode(422).body("errors.field", hasItem("batchId"));
+        postInvalid(release("B 1; drop", curingJob())).statusCode(422).body("errors.field", hasItem("batchId"));
+        postInvalid(release("", curingJob())).statusCode(422).body("errors.field", hasItem("batchId"));
+        postInvalid(release("B".repeat(129), curingJob())).statusCode(422).body("errors.field", hasItem("batchId"));
     }
 
     @Test
     void anUnknownPropertyOrAMissingJobIsRefusedNamingIt() {
         ObjectNode typo = (ObjectNode) parse(release("B-12", curingJob()));
         typo.put("batch", "B-12");
-        post(typo.toString()).statusCode(422).body("errors.field", hasItem("batch"));
-        post("{ \"batchId\": \"B-12\" }").statusCode(422).body("errors.field", hasItem("job"));
+        postInvalid(Jobs.text(typo)).statusCode(422).body("errors.field", hasItem("batch"));
+        postInvalid("{ \"batchId\": \"B-12\" }").statusCode(422).body("errors.field", hasItem("job"));
     }
 
     @Test
     void theAnswerIsJsonOnly() {
-        given().port(app.port()).contentType("application/json").accept("text/csv")
+        server.request(Contract.responsesOnly()).contentType("application/json").accept("text/csv")
                 .body(release("B-13", curingJob())).post("/v1/release-checks")
                 .then().statusCode(406).contentType("application/problem+json");
     }

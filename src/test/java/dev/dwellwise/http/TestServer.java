@@ -39,7 +39,12 @@ final class TestServer implements AutoCloseable {
     }
 
     static TestServer start() {
-        Javalin app = App.create(ServiceConfig.defaults().withPort(0), Services.bundled());
+        return start(Services.bundled());
+    }
+
+    /** As {@link #start()}, with other core objects (a smaller budget, say). */
+    static TestServer start(Services services) {
+        Javalin app = App.create(ServiceConfig.defaults().withPort(0), services);
         app.start();
         return new TestServer(app);
     }
