@@ -150,6 +150,30 @@ class CureChecksTest {
     }
 
     @Test
+    void aSlabIsJudgedForUnderCureAtItsColdestPointAndForOverBakeAtItsHottest() {
+        // 40 mm of steel at h = 300: Bi = 300 x 0.02 / 63.9 = 0.094 per face, so the mid-plane lags the faces and
+        // spends less time above 180 C. A limit halfway between the two points' figures tells which point is judged.
+        Job thick = CureJobs.onSlab(job(20, CureJobs.timeAbove(180, 0, null), timed("bake", 200, 300, 1800)), 40);
+        CureReport figures = SIMULATOR.simulate(thick).cure();
+        double coldest = figures.coldest().timeAboveSeconds();
+        double hottest = figures.hottest().timeAboveSeconds();
+        assertTrue(hottest > coldest + 10, () -> "surface " + hottest + " s, core " + coldest + " s");
+        double between = (coldest + hottest) / 2;
+        CheckResult underCured = check(SIMULATOR.simulate(withCure(thick, CureJobs.timeAbove(180, between, null))),
+                CureChecks.TIME_ABOVE);
+        assertEquals(CheckResult.FAIL, underCured.status());
+        assertEquals(coldest, underCured.value());
+        CheckResult overBaked = check(SIMULATOR.simulate(withCure(thick, CureJobs.timeAbove(180, 0, between))),
+                CureChecks.TIME_ABOVE);
+        assertEquals(CheckResult.FAIL, overBaked.status());
+        assertEquals(hottest, overBaked.value());
+    }
+
+    private static Job withCure(Job job, Cure cure) {
+        return new Job(job.part(), job.stages(), cure, job.limits(), job.model(), job.slabCells(), job.output());
+    }
+
+    @Test
     void aCureFigureBeyondItsBudgetIsAComputationErrorNotAVerdict() {
         Simulator stingy = CureJobs.simulator(new CureBudget(50));
         assertThrows(CureComputationException.class,

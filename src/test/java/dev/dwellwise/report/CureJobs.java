@@ -65,6 +65,13 @@ final class CureJobs {
         return new Job(plate, List.of(stages), cure, null, "lumped", null, new Output(null, false, null));
     }
 
+    /** The same job on the slab model with the part {@code thicknessMm} thick: its surface leads its core. */
+    static Job onSlab(Job job, double thicknessMm) {
+        Part p = job.part();
+        Part thick = new Part(p.material(), thicknessMm, null, p.exposedFaces(), p.emissivity(), p.initialTemperatureC());
+        return new Job(thick, job.stages(), job.cure(), job.limits(), "slab", null, job.output());
+    }
+
     /** The plate held at {@code c} for {@code seconds}: it starts at the air temperature and stays there. */
     static Job isothermal(double c, double seconds, Cure cure) {
         return job(c, cure, timed("hold", c, 30, seconds));
