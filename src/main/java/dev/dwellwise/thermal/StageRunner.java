@@ -102,7 +102,7 @@ public final class StageRunner {
         double k = problem.part().effectiveConductivity(lowK, highK);
         double biot = (stage.convection() + figures.largestHr) * problem.part().characteristicLengthM() / k;
         return new StageOutcome(stage, start, endTime, ended, first, last, figures.peakK, figures.largestHr,
-                biot, SteadyState.of(stage, problem.part().emissivity()),
+                biot, SteadyState.of(stage, problem.part().emissivity(), first.meanK()),
                 hold == null ? 0 : hold.accumulated, figures.largestRate);
     }
 

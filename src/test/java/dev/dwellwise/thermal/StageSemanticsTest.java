@@ -160,9 +160,20 @@ class StageSemanticsTest {
     @Test
     void theSteadyTemperatureBalancesConvectionAgainstColderSurroundings() {
         // root of h (Ta - T) + eps sigma (Ts^4 - T^4) = 0, checked by putting it back into the balance
-        double steady = SteadyState.temperatureK(20, K + 200, 0.9, K + 100);
+        double steady = SteadyState.temperatureK(20, K + 200, 0.9, K + 100, K + 20);
         assertTrue(steady > K + 100 && steady < K + 200);
         assertEquals(0, Physics.surfaceFlux(20, K + 200, 0.9, K + 100, steady), 1e-8);
+    }
+
+    @Test
+    void withNoHeatExchangeThePartKeepsItsTemperatureAndThatIsItsSteadyTemperature() {
+        ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0, 20);
+        ThermalHistory h = run(part, 10,
+                Parts.stage("insulated transfer", 100, 100, 0, new EndCondition.ColdestReaches(K + 50), 600));
+        StageOutcome s = h.stages().get(0);
+        assertEquals(StageEnd.MAX_SECONDS, s.ended());
+        assertEquals(K + 20, s.end().meanK(), 1e-9);
+        assertEquals(K + 20, s.steadyK(), 1e-9);
     }
 
     @Test
