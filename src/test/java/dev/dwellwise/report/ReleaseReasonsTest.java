@@ -13,7 +13,7 @@ class ReleaseReasonsTest {
     }
 
     @Test
-    void underCureComesFirstThenOverBakeStageEndHandlingHeatingRateAndModelValidity() {
+    void modelValidityComesFirstThenUnderCureOverBakeStageEndHandlingAndHeatingRate() {
         List<CheckResult> checks = List.of(
                 failed("model-validity", 0.2, 0.1, null),
                 new CheckResult("stage-end", CheckResult.PASS, 600.0, 600.0, "met", "bake"),
@@ -26,6 +26,7 @@ class ReleaseReasonsTest {
                 failed(CureChecks.DEGREE, 0.9, 0.95, null),
                 failed(CureChecks.GLASS_TRANSITION, 100, 110, null));
         assertEquals(List.of(
+                "model-validity over",
                 CureChecks.EQUIVALENT_TIME + " short",
                 CureChecks.DEGREE + " short",
                 CureChecks.GLASS_TRANSITION + " short",
@@ -33,8 +34,7 @@ class ReleaseReasonsTest {
                 CureChecks.TIME_ABOVE + " over",
                 "stage 'preheat': stage-end short",
                 "handling-temperature over",
-                "heating-rate over",
-                "model-validity over"), ReleaseReasons.of(checks));
+                "heating-rate over"), ReleaseReasons.of(checks));
     }
 
     @Test
