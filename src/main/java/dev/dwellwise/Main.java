@@ -5,6 +5,8 @@ import dev.dwellwise.http.ServiceConfig;
 import dev.dwellwise.http.Services;
 import dev.dwellwise.job.InvalidJobException;
 import dev.dwellwise.job.Job;
+import dev.dwellwise.job.WireJson;
+import com.fasterxml.jackson.databind.JsonMappingException;
 import dev.dwellwise.report.SimulationResult;
 import io.javalin.Javalin;
 import java.util.List;
@@ -116,6 +118,9 @@ public final class Main {
             return result.passed() ? EXIT_PASS : EXIT_FAIL;
         } catch (InvalidJobException e) {
             e.errors().forEach(fe -> err.println(fe.field() + ": " + fe.message()));
+            return EXIT_INVALID;
+        } catch (JsonMappingException e) {
+            err.println(WireJson.path(e.getPath()) + ": " + e.getOriginalMessage().split("\\(class")[0].trim());
             return EXIT_INVALID;
         } catch (IOException e) {
             err.println("cannot read the job: " + e.getMessage());

@@ -1,10 +1,10 @@
 package dev.dwellwise.http;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
+import dev.dwellwise.cure.CureComputationException;
 import dev.dwellwise.job.FieldError;
 import dev.dwellwise.job.InvalidJobException;
 import dev.dwellwise.thermal.ComputeLimitExceededException;
-import dev.dwellwise.thermal.ModelUnavailableException;
 import io.javalin.Javalin;
 import io.javalin.http.Context;
 import io.javalin.http.HandlerType;
@@ -45,6 +45,7 @@ public final class App {
         SimulationRoutes simulations = new SimulationRoutes(services, solver, new JsonBodies(services.mapper()),
                 config);
         LibraryRoutes library = new LibraryRoutes(services);
+        ReleaseRoutes releases = new ReleaseRoutes(services, solver, new JsonBodies(services.mapper()), config);
         CorsPolicy cors = new CorsPolicy(config.corsOrigins());
         BearerAuth auth = new BearerAuth(config.apiToken());
         return Javalin.create(cfg -> {
@@ -95,20 +96,24 @@ public final class App {
             cfg.routes.get("/v1/examples", library::examples);
             cfg.routes.get("/v1/examples/{id}", library::example);
             cfg.routes.post("/v1/simulations", simulations::simulate);
+            cfg.routes.post("/v1/release-checks", releases::release);
 
             cfg.routes.exception(ApiException.class, (e, ctx) -> problems.write(ctx, e.type(), e.getMessage(),
                     e.errors()));
             cfg.routes.exception(InvalidJobException.class, (e, ctx) -> problems.write(ctx, ProblemType.INVALID_JOB,
                     summary(e.errors()), e.errors()));
-            cfg.routes.exception(ModelUnavailableException.class, (e, ctx) -> problems.write(ctx,
-                    ProblemType.INVALID_JOB, e.getMessage(), List.of(new FieldError(modelField(ctx), e.getMessage()))));
             cfg.routes.exception(ComputeLimitExceededException.class, (e, ctx) -> problems.write(ctx,
                     ProblemType.COMPUTE_LIMIT, e.getMessage(), List.of(new FieldError(limitField(ctx, e),
                             e.getMessage() + (e.limit() == ComputeLimitExceededException.Limit.SAMPLES
                                     ? "; raise output.sampleSeconds or set output.series to false"
                                     : "; shorten the stages or give them smaller maxSeconds")))));
-            cfg.routes.exception(HttpResponseException.class, (e, ctx) -> problems.write(ctx,
-                    fromStatus(e.getStatus()), e.getMessage(), List.of()));
+            cfg.routes.exception(CureComputationException.class, (e, ctx) -> problems.write(ctx,
+                    ProblemType.COMPUTE_LIMIT, e.getMessage(), List.of(new FieldError(jobPrefix(ctx) + "cure",
+                            e.getMessage() + "; check the cure spec's parameters against the coating's data"))));
+            cfg.routes.exception(HttpResponseException.class, (e, ctx) -> {
+                allowHeader(e, ctx);
+                problems.write(ctx, fromStatus(e.getStatus()), e.getMessage(), List.of());
+            });
             // Reading the body failed under the handler: the connection ended early or the chunked
             // framing was broken. The client's fault, and nothing for an operator to look at.
             cfg.routes.exception(IOException.class, (e, ctx) -> problems.write(ctx, ProblemType.UNREADABLE_BODY,
@@ -145,6 +150,14 @@ public final class App {
         }
     }
 
+    /** A 405 must name the methods the path offers (RFC 9110, 15.5.6); Javalin puts them in the details. */
+    private static void allowHeader(HttpResponseException e, Context ctx) {
+        String methods = e.getDetails().getOrDefault("availableMethods", e.getDetails().get("Available methods"));
+        if (e.getStatus() == 405 && methods != null) {
+            ctx.header("Allow", methods);
+        }
+    }
+
     private static String summary(List<FieldError> errors) {
         FieldError first = errors.get(0);
         return first.field() + ": " + first.message()
@@ -155,10 +168,6 @@ public final class App {
     private static String jobPrefix(Context ctx) {
         String prefix = ctx.attribute(SimulationRoutes.JOB_PREFIX);
         return prefix == null ? "" : prefix;
-    }
-
-    private static String modelField(Context ctx) {
-        return jobPrefix(ctx) + "model";
     }
 
     private static String limitField(Context ctx, ComputeLimitExceededException e) {

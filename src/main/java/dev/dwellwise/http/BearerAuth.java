@@ -11,12 +11,13 @@ import java.util.Set;
 /**
  * The optional bearer token (RFC 6750). When configured, every request needs
  * {@code Authorization: Bearer <token>} except the probes and the metrics scrape (the orchestrator
- * and Prometheus carry no token, and neither answer holds plant data) and OPTIONS (browsers send
- * preflights without credentials). A refusal is a 401 problem with {@code WWW-Authenticate}.
+ * and Prometheus carry no token, and neither answer holds plant data), the contract (the same file
+ * as in the repository) and OPTIONS (browsers send preflights without credentials). A refusal is a
+ * 401 problem with {@code WWW-Authenticate}.
  */
 final class BearerAuth {
 
-    static final Set<String> OPEN_PATHS = Set.of("/health/live", "/health/ready", "/metrics");
+    static final Set<String> OPEN_PATHS = Set.of("/health/live", "/health/ready", "/metrics", "/openapi.yaml");
     private static final String CHALLENGE = "Bearer realm=\"dwellwise\"";
 
     /** SHA-256 of the token: comparing digests takes the same time whatever the given token's length. */

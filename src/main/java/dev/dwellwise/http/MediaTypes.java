@@ -10,6 +10,7 @@ final class MediaTypes {
     static final String PROBLEM_JSON = "application/problem+json";
     static final String CSV = "text/csv";
     static final String YAML = "application/yaml";
+    static final String SVG = "image/svg+xml";
 
     private MediaTypes() {
     }

@@ -1,6 +1,7 @@
 package dev.dwellwise.http;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.dwellwise.cure.CureBudget;
 import dev.dwellwise.job.ExampleLibrary;
 import dev.dwellwise.job.JobLimits;
 import dev.dwellwise.job.WireJson;
@@ -9,10 +10,10 @@ import dev.dwellwise.thermal.ComputeBudget;
 import dev.dwellwise.thermal.LumpedModel;
 import dev.dwellwise.thermal.MaterialLibrary;
 import dev.dwellwise.thermal.ModelSelector;
+import dev.dwellwise.thermal.SlabModel;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
-import java.util.Optional;
 import java.util.Properties;
 
 /** The core objects the routes call, built once per app. All are immutable and thread-safe. */
@@ -33,10 +34,10 @@ public record Services(Simulator simulator, MaterialLibrary materials, ExampleLi
         ObjectMapper mapper = WireJson.create();
         MaterialLibrary materials = MaterialLibrary.bundled();
         String version = readVersion();
-        ModelSelector selector = new ModelSelector(new LumpedModel(), Optional.empty());
+        ModelSelector selector = new ModelSelector(new LumpedModel(), new SlabModel());
         ComputeBudget budget = ComputeBudget.standard().withMaxMillis(config.computeBudgetMillis());
         Simulator simulator = new Simulator(materials, selector, JobLimits.standard(), budget,
-                "dwellwise " + version);
+                CureBudget.standard(), "dwellwise " + version);
         return new Services(simulator, materials, ExampleLibrary.bundled(mapper), mapper, version,
                 resource("/openapi/dwellwise.yaml"));
     }

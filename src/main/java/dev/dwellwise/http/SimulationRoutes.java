@@ -2,19 +2,21 @@ package dev.dwellwise.http;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
 import dev.dwellwise.job.Job;
+import dev.dwellwise.job.Limits;
 import dev.dwellwise.report.SeriesCsv;
+import dev.dwellwise.report.SeriesSvg;
 import dev.dwellwise.report.SimulationResult;
 import io.javalin.http.Context;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
 
-/** {@code POST /v1/simulations}: a job in, the result out as JSON or, on request, the series as CSV. */
+/** {@code POST /v1/simulations}: a job in, the result out as JSON or, on request, the series as CSV or an SVG chart. */
 final class SimulationRoutes {
 
     /** Request attribute: where the job sits in the body, for field paths ("" or "job."). */
     static final String JOB_PREFIX = "dwellwise.jobPrefix";
 
-    private static final List<String> OFFERED = List.of(MediaTypes.JSON, MediaTypes.CSV);
+    private static final List<String> OFFERED = List.of(MediaTypes.JSON, MediaTypes.CSV, MediaTypes.SVG);
 
     private final Services services;
     private final Solver solver;
@@ -32,13 +34,18 @@ final class SimulationRoutes {
         String produce = negotiate(ctx, OFFERED);
         Job job = bodies.read(body(ctx, config), Job.class);
         SimulationResult result = solver.simulate(job, "");
+        if (!MediaTypes.JSON.equals(produce) && result.series() == null) {
+            throw new ApiException(ProblemType.NOT_ACCEPTABLE, produce + " renders the series, and the job "
+                    + "set output.series to false");
+        }
         if (MediaTypes.CSV.equals(produce)) {
-            if (result.series() == null) {
-                throw new ApiException(ProblemType.NOT_ACCEPTABLE, "text/csv carries the series, and the job "
-                        + "set output.series to false");
-            }
             ctx.contentType(MediaTypes.CSV + "; charset=utf-8")
                     .result(SeriesCsv.render(result.series()).getBytes(StandardCharsets.UTF_8));
+            return;
+        }
+        if (MediaTypes.SVG.equals(produce)) {
+            Limits limits = job.limits() == null ? Limits.NONE : job.limits();
+            ctx.contentType(MediaTypes.SVG).result(SeriesSvg.render(result, limits).getBytes(StandardCharsets.UTF_8));
             return;
         }
         ctx.contentType(MediaTypes.JSON).result(services.mapper().writeValueAsBytes(result));

@@ -1,18 +1,23 @@
 package dev.dwellwise.http;
 
+import dev.dwellwise.cure.CureComputationException;
 import dev.dwellwise.job.InvalidJobException;
 import dev.dwellwise.job.Job;
+import dev.dwellwise.job.ReleaseRequest;
+import dev.dwellwise.report.ReleaseAnswer;
 import dev.dwellwise.report.SimulationResult;
 import dev.dwellwise.report.Simulator;
 import dev.dwellwise.thermal.ComputeLimitExceededException;
 import io.micrometer.core.instrument.MeterRegistry;
 import io.micrometer.core.instrument.Timer;
 import java.time.Duration;
+import java.util.function.Function;
+import java.util.function.Supplier;
 
 /**
- * The simulator as the routes call it: admitted by {@link AdmissionControl}, and timed into
- * {@code dwellwise_solve_seconds} by outcome. The timing lives here so that the numerical packages
- * stay free of metrics.
+ * The simulator as the routes call it: every solve admitted by {@link AdmissionControl} and timed
+ * into {@code dwellwise_solve_seconds} by kind and outcome. The timing lives here so that the
+ * numerical packages stay free of metrics.
  */
 final class Solver {
 
@@ -28,31 +33,38 @@ final class Solver {
 
     /** Solves a job, its field paths under {@code prefix} ("" when the job is the body). */
     SimulationResult simulate(Job job, String prefix) {
-        return admission.run(() -> timed(job, prefix));
+        return admission.run(() -> timed("simulation", () -> simulator.simulate(job, prefix),
+                SimulationResult::verdict));
     }
 
-    private SimulationResult timed(Job job, String prefix) {
+    /** The MES's release check of one batch. */
+    ReleaseAnswer release(ReleaseRequest request) {
+        return admission.run(() -> timed("release-check", () -> simulator.release(request),
+                answer -> answer.release() ? "release" : "hold"));
+    }
+
+    private <T> T timed(String kind, Supplier<T> solve, Function<T, String> outcomeOf) {
         long start = System.nanoTime();
         String outcome = "error";
         try {
-            SimulationResult result = simulator.simulate(job, prefix);
-            outcome = result.verdict();
+            T result = solve.get();
+            outcome = outcomeOf.apply(result);
             return result;
         } catch (InvalidJobException e) {
             outcome = "invalid";
             throw e;
-        } catch (ComputeLimitExceededException e) {
+        } catch (ComputeLimitExceededException | CureComputationException e) {
             outcome = "compute-limit";
             throw e;
         } finally {
-            timer(outcome).record(Duration.ofNanos(System.nanoTime() - start));
+            timer(kind, outcome).record(Duration.ofNanos(System.nanoTime() - start));
         }
     }
 
-    private Timer timer(String outcome) {
+    private Timer timer(String kind, String outcome) {
         return Timer.builder("dwellwise.solve")
-                .description("Time inside the simulator per job: validation, solve, checks and write-up")
-                .tag("outcome", outcome)
+                .description("Time inside the simulator per request: validation, solve, checks and write-up")
+                .tags("kind", kind, "outcome", outcome)
                 .serviceLevelObjectives(ServiceMetrics.LATENCY_BUCKETS)
                 .register(registry);
     }

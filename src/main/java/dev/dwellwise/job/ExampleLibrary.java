@@ -8,12 +8,12 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
-/** The bundled example jobs, read once from {@code examples/*.json} on the classpath. */
+/**
+ * The bundled example jobs: {@code examples/index.json} lists id, title and description; each job
+ * is a plain job file {@code examples/<id>.json}, so it can be posted as it is
+ * ({@code curl --data @src/main/resources/examples/<id>.json ...}).
+ */
 public final class ExampleLibrary {
-
-    /** The examples in the order they are listed. */
-    static final List<String> IDS = List.of("powder-coat-steel-panel", "e-coat-bracket-ramped-oven",
-            "aluminium-extrusion-ageing");
 
     private final List<Example> examples;
 
@@ -21,24 +21,28 @@ public final class ExampleLibrary {
         this.examples = List.copyOf(examples);
     }
 
+    /** An entry of the index: an example without its job. */
+    record Entry(String id, String title, String description) {
+    }
+
     public static ExampleLibrary bundled(ObjectMapper wireMapper) {
         List<Example> out = new ArrayList<>();
-        for (String id : IDS) {
-            String resource = "/examples/" + id + ".json";
-            try (InputStream in = ExampleLibrary.class.getResourceAsStream(resource)) {
-                if (in == null) {
-                    throw new IllegalStateException("missing bundled example " + resource);
-                }
-                Example example = wireMapper.readValue(in, Example.class);
-                if (!id.equals(example.id())) {
-                    throw new IllegalStateException(resource + " has id " + example.id());
-                }
-                out.add(example);
-            } catch (IOException e) {
-                throw new UncheckedIOException("unreadable bundled example " + resource, e);
-            }
+        for (Entry entry : read(wireMapper, "/examples/index.json", Entry[].class)) {
+            Job job = read(wireMapper, "/examples/" + entry.id() + ".json", Job.class);
+            out.add(new Example(entry.id(), entry.title(), entry.description(), job));
         }
         return new ExampleLibrary(out);
+    }
+
+    private static <T> T read(ObjectMapper mapper, String resource, Class<T> type) {
+        try (InputStream in = ExampleLibrary.class.getResourceAsStream(resource)) {
+            if (in == null) {
+                throw new IllegalStateException("missing bundled resource " + resource);
+            }
+            return mapper.readValue(in, type);
+        } catch (IOException e) {
+            throw new UncheckedIOException("unreadable bundled resource " + resource, e);
+        }
     }
 
     public List<Example> all() {

@@ -4,26 +4,27 @@ import dev.dwellwise.thermal.MaterialLibrary;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
+import java.util.regex.Pattern;
 
 /**
  * Checks every value of a bound job and names each offending field by its path. Collects all the
  * errors rather than stopping at the first, so a client fixes a request in one round trip.
  */
-public final class JobValidator {
+public final class JobValidator extends FieldChecks {
 
-    /** Below this the value is at or below absolute zero, °C. */
-    private static final double ABSOLUTE_ZERO_C = -273.15;
-    /** Above this no oven or part temperature makes sense, °C (steel melts near 1500 °C). */
-    private static final double MAX_TEMPERATURE_C = 2000;
     private static final double MAX_CONVECTION = 10_000;
     private static final double MAX_THICKNESS_MM = 1000;
     private static final Set<String> MODELS = Set.of("auto", "lumped", "slab");
+    /** A batch id goes into answers and log lines as it is, so only characters that are safe in both. */
+    private static final Pattern SAFE_BATCH_ID = Pattern.compile("[A-Za-z0-9._:/-]{1,128}");
+    /** Where the job sits in a release request, for its field paths. */
+    public static final String RELEASE_JOB_PREFIX = "job.";
 
     private final MaterialLibrary library;
     private final JobLimits limits;
-    private final List<FieldError> errors = new ArrayList<>();
 
     private JobValidator(MaterialLibrary library, JobLimits limits) {
+        super(new ArrayList<>());
         this.library = library;
         this.limits = limits;
     }
@@ -47,11 +48,37 @@ public final class JobValidator {
         return job.withDefaults();
     }
 
+    /**
+     * Validates a release request, its batch id and its job (field paths under {@code job.}), and
+     * throws {@link InvalidJobException} listing every error of both; returns the job with defaults.
+     */
+    public static Job validated(ReleaseRequest request, MaterialLibrary library, JobLimits limits) {
+        List<FieldError> errors = new ArrayList<>();
+        if (request.batchId() == null) {
+            errors.add(new FieldError("batchId", "is required"));
+        } else if (!SAFE_BATCH_ID.matcher(request.batchId()).matches()) {
+            errors.add(new FieldError("batchId", "must be 1 to 128 letters, digits and . _ : / -"));
+        }
+        Job job = null;
+        try {
+            job = validated(request.job(), library, limits, RELEASE_JOB_PREFIX);
+        } catch (InvalidJobException e) {
+            errors.addAll(e.errors());
+        }
+        if (!errors.isEmpty()) {
+            throw new InvalidJobException(errors);
+        }
+        return job;
+    }
+
     private void job(Job job, String p) {
         if (required(job.part(), p + "part")) {
             part(job.part(), p + "part");
         }
         stages(job.stages(), p + "stages");
+        if (job.cure() != null) {
+            new CureValidator(errors).cure(job.cure(), p + "cure");
+        }
         if (job.limits() != null) {
             limitsOf(job.limits(), p + "limits");
         }
@@ -311,66 +338,7 @@ public final class JobValidator {
         }
     }
 
-    // ---- small checks; each returns whether the value passed, so callers can go on safely ----
-
-    private boolean required(Object value, String field) {
-        if (value == null) {
-            add(field, "is required");
-            return false;
-        }
-        return true;
-    }
-
-    private boolean finite(double value, String field) {
-        if (!Double.isFinite(value)) {
-            add(field, "must be a finite number");
-            return false;
-        }
-        return true;
-    }
-
-    private boolean temperature(double c, String field) {
-        if (!finite(c, field)) {
-            return false;
-        }
-        if (c <= ABSOLUTE_ZERO_C) {
-            add(field, "must be above absolute zero (-273.15 °C)");
-            return false;
-        }
-        if (c > MAX_TEMPERATURE_C) {
-            add(field, "must be at most " + (int) MAX_TEMPERATURE_C + " °C");
-            return false;
-        }
-        return true;
-    }
-
-    private void range(double value, double low, double high, String field) {
-        if (finite(value, field) && !(value >= low && value <= high)) {
-            add(field, "must be from " + trim(low) + " to " + trim(high));
-        }
-    }
-
-    private void positive(Double value, String field, boolean isRequired) {
-        if (value == null) {
-            if (isRequired) {
-                add(field, "is required");
-            }
-            return;
-        }
-        if (finite(value, field) && !(value > 0)) {
-            add(field, "must be above 0");
-        }
-    }
-
-    private static String trim(double v) {
-        return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(v);
-    }
-
     private static double nz(Double d) {
         return d == null ? Double.NaN : d;
-    }
-
-    private void add(String field, String message) {
-        errors.add(new FieldError(field, message));
     }
 }

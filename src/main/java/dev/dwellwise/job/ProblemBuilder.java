@@ -17,6 +17,9 @@ import java.util.function.Function;
 /** Turns a validated job (defaults filled) into the solver's problem: SI units, kelvin, resolved materials. */
 public final class ProblemBuilder {
 
+    /** A spacing longer than any schedule the validator admits (40 days): no sample falls inside it. */
+    private static final double UNSAMPLED_SECONDS = 1e9;
+
     private final MaterialLibrary library;
 
     public ProblemBuilder(MaterialLibrary library) {
@@ -30,7 +33,16 @@ public final class ProblemBuilder {
         }
         List<Double> profileTimes = job.output().profiles() == null ? List.of()
                 : job.output().profiles().timesSeconds();
-        return new ThermalProblem(part(job.part()), stages, job.output().sampleSeconds(), budget, profileTimes);
+        return new ThermalProblem(part(job.part()), stages, sampleSeconds(job.output()), budget, profileTimes);
+    }
+
+    /**
+     * The sample spacing the solver uses. A job that wants no series gets only the stage boundaries
+     * and events sampled, so that a fine {@code sampleSeconds} it does not need cannot trip the
+     * sample budget (the compute-limit problem tells clients to set {@code output.series} to false).
+     */
+    private static double sampleSeconds(Output output) {
+        return Boolean.TRUE.equals(output.series()) ? output.sampleSeconds() : UNSAMPLED_SECONDS;
     }
 
     public ThermalPart part(Part part) {

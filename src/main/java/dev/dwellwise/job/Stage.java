@@ -19,8 +19,13 @@ public record Stage(String name, Double airTemperatureC, Double airEndTemperatur
     public static final double DEFAULT_MAX_SECONDS = 86_400;
 
     Stage withDefaults() {
-        return new Stage(name, airTemperatureC, airEndTemperatureC, convectionWPerM2K, surroundingsTemperatureC,
-                surroundingsEndTemperatureC, until, maxSeconds == null ? defaultMaxSeconds() : maxSeconds);
+        // surroundings left out follow the air, its ramp included: spelt out, so that a job that
+        // writes them as the air's hashes the same as one that leaves them out
+        boolean followAir = surroundingsTemperatureC == null;
+        return new Stage(name, airTemperatureC, airEndTemperatureC, convectionWPerM2K,
+                followAir ? airTemperatureC : surroundingsTemperatureC,
+                followAir ? airEndTemperatureC : surroundingsEndTemperatureC,
+                until, maxSeconds == null ? defaultMaxSeconds() : maxSeconds);
     }
 
     private double defaultMaxSeconds() {

@@ -4,12 +4,14 @@ import com.fasterxml.jackson.annotation.JsonInclude;
 import com.fasterxml.jackson.core.StreamReadConstraints;
 import com.fasterxml.jackson.core.json.JsonReadFeature;
 import com.fasterxml.jackson.databind.DeserializationFeature;
+import com.fasterxml.jackson.databind.JsonMappingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.cfg.CoercionAction;
 import com.fasterxml.jackson.databind.cfg.CoercionInputShape;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 import com.fasterxml.jackson.databind.type.LogicalType;
+import java.util.List;
 import com.fasterxml.jackson.core.JsonFactory;
 
 /**
@@ -48,4 +50,21 @@ public final class WireJson {
         mapper.coercionConfigFor(LogicalType.Textual).setCoercion(CoercionInputShape.Boolean, CoercionAction.Fail);
         return mapper;
     }
+
+    /** Jackson's reference path as the contract writes it: {@code stages[2].until.seconds}. */
+    public static String path(List<JsonMappingException.Reference> refs) {
+        StringBuilder out = new StringBuilder();
+        for (JsonMappingException.Reference ref : refs) {
+            if (ref.getFieldName() != null) {
+                if (out.length() > 0) {
+                    out.append('.');
+                }
+                out.append(ref.getFieldName());
+            } else if (ref.getIndex() >= 0) {
+                out.append('[').append(ref.getIndex()).append(']');
+            }
+        }
+        return out.length() == 0 ? "body" : out.toString();
+    }
+
 }

@@ -47,18 +47,21 @@ public final class Checks {
     static CheckResult modelValidity(ModelSelector.Selection selection) {
         ThermalHistory history = selection.history();
         double bi = history.largestBiotNumber();
-        String where = "largest Biot number " + ModelSelector.format(bi) + " (stage '" + history.stageWith(Comparator.comparingDouble(StageOutcome::biotNumber)).conditions().name()
-                + "')";
+        String where = "largest Biot number " + ModelSelector.format(bi) + " (stage '"
+                + history.stageWith(Comparator.comparingDouble(StageOutcome::biotNumber)).conditions().name() + "')";
         double value = Rounding.significant(bi);
+        String spread = Double.isNaN(selection.throughThicknessSpreadK()) ? ""
+                : "; the surface and core differ by up to " + k1(selection.throughThicknessSpreadK());
         if (!"lumped".equals(history.modelName())) {
             return new CheckResult("model-validity", CheckResult.PASS, value, ModelSelector.BIOT_LIMIT,
-                    where + ": through-thickness conduction computed with the " + history.modelName() + " model",
-                    null);
+                    where + ": through-thickness conduction computed with the " + history.modelName() + " model"
+                            + spread, null);
         }
         if (selection.lumpedBeyondValidity()) {
             return new CheckResult("model-validity", CheckResult.FAIL, value, ModelSelector.BIOT_LIMIT,
-                    where + " is at or above " + ModelSelector.BIOT_LIMIT + ": the surface and core of this part "
-                            + "differ noticeably and the lumped model hides it; use the slab model", null);
+                    where + " is at or above " + ModelSelector.BIOT_LIMIT + ": the lumped model treats the part as "
+                            + "one temperature, but the slab model shows the surface and core differing by up to "
+                            + k1(selection.throughThicknessSpreadK()) + "; use model auto or slab", null);
         }
         return new CheckResult("model-validity", CheckResult.PASS, value, ModelSelector.BIOT_LIMIT,
                 where + " is below " + ModelSelector.BIOT_LIMIT
@@ -141,7 +144,7 @@ public final class Checks {
         String detail = String.format(Locale.ROOT, "the part's mean temperature rises at up to %.1f °C/min "
                         + "(stage '%s'), %s the %s °C/min limit%s", rate, fastest.conditions().name(),
                 ok ? "within" : "faster than", trim(limitCPerMin),
-                ok ? "" : ": risk of blistering or outgassing; preheat more gently or lower the first zone's air");
+                ok ? "" : ": risk of blistering or outgassing of the coating, or of thermal stress in the part; preheat more gently or lower the first zone's air");
         return new CheckResult("heating-rate", ok ? CheckResult.PASS : CheckResult.FAIL, Rounding.temperature(rate),
                 limitCPerMin, detail, null);
     }
@@ -163,7 +166,7 @@ public final class Checks {
         return String.format(Locale.ROOT, "%.1f s", seconds);
     }
 
-    private static String trim(double v) {
+    static String trim(double v) {
         return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(v);
     }
 }

@@ -16,8 +16,8 @@ public final class ResultAssembler {
     private ResultAssembler() {
     }
 
-    public static SimulationResult assemble(Job job, ModelSelector.Selection selection, List<CheckResult> checks,
-                                            Provenance provenance) {
+    public static SimulationResult assemble(Job job, ModelSelector.Selection selection, CureReport cure,
+                                            List<CheckResult> checks, Provenance provenance) {
         ThermalHistory history = selection.history();
         boolean failed = checks.stream().anyMatch(CheckResult::failed);
         List<StageReport> stages = new ArrayList<>();
@@ -26,7 +26,7 @@ public final class ResultAssembler {
         }
         return new SimulationResult(failed ? SimulationResult.FAIL : SimulationResult.PASS,
                 new ModelReport(history.modelName(), selection.requested(), selection.reason()),
-                Rounding.seconds(history.totalSeconds()), stages, checks,
+                Rounding.seconds(history.totalSeconds()), stages, cure, checks,
                 Boolean.TRUE.equals(job.output().series()) ? series(history.series()) : null,
                 job.output().profiles() == null ? null : profiles(history.profiles()),
                 provenance, Cautions.ALL);

@@ -31,10 +31,14 @@ final class Rounding {
         return new BigDecimal(value).round(new MathContext(6, RoundingMode.HALF_EVEN)).doubleValue();
     }
 
+    private static final double[] SCALE = {1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6};
+
+    /** Rounds half-even to {@code decimals} places (IEEE arithmetic only: cheap and the same on every JVM). */
     static double fixed(double value, int decimals) {
         if (!Double.isFinite(value)) {
             return value;
         }
-        return BigDecimal.valueOf(value).setScale(decimals, RoundingMode.HALF_EVEN).doubleValue();
+        double scale = SCALE[decimals];
+        return Math.rint(value * scale) / scale;
     }
 }

@@ -2,9 +2,12 @@ package dev.dwellwise.report;
 
 import java.util.List;
 
-/** The answer to a simulation: the verdict first, then why, then the history. */
+/**
+ * The answer to a simulation: the verdict first, then why, then the history. {@code cure} is
+ * present only when the job has a cure spec.
+ */
 public record SimulationResult(String verdict, ModelReport model, double totalSeconds, List<StageReport> stages,
-                               List<CheckResult> checks, SeriesReport series, List<ProfileReport> profiles,
+                               CureReport cure, List<CheckResult> checks, SeriesReport series, List<ProfileReport> profiles,
                                Provenance provenance, List<String> cautions) {
 
     public static final String PASS = "pass";

@@ -1,38 +1,53 @@
 package dev.dwellwise.report;
 
+import dev.dwellwise.cure.CureBudget;
 import dev.dwellwise.job.CanonicalJson;
 import dev.dwellwise.job.Job;
 import dev.dwellwise.job.JobLimits;
 import dev.dwellwise.job.JobValidator;
+import dev.dwellwise.job.Output;
 import dev.dwellwise.job.ProblemBuilder;
+import dev.dwellwise.job.ReleaseRequest;
 import dev.dwellwise.thermal.ComputeBudget;
 import dev.dwellwise.thermal.MaterialLibrary;
 import dev.dwellwise.thermal.ModelSelector;
+import dev.dwellwise.thermal.SlabModel;
 import dev.dwellwise.thermal.ThermalProblem;
+import java.util.ArrayList;
 import java.util.List;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
 /**
  * The whole simulation of one job: validate, fill defaults, hash, build the problem, choose the
- * model and solve, check, and write up. Stateless and thread-safe; every solve gets fresh steppers.
+ * model and solve, check (the cure included), and write up. Stateless and thread-safe; every solve
+ * gets fresh steppers.
  */
 public final class Simulator {
 
     private static final Logger LOG = LoggerFactory.getLogger(Simulator.class);
 
+    /**
+     * What a release decision needs of the output: nothing. No series and no profiles, and one
+     * sample a day (the coarsest spacing a job may ask for), so that only the stage boundaries are
+     * sampled; samples are read off the solution and change no figure.
+     */
+    private static final Output DECISION_ONLY = new Output(86_400.0, false, null);
+
     private final MaterialLibrary library;
     private final ModelSelector selector;
     private final JobLimits limits;
     private final ComputeBudget budget;
+    private final CureBudget cureBudget;
     private final String service;
 
     public Simulator(MaterialLibrary library, ModelSelector selector, JobLimits limits, ComputeBudget budget,
-                     String service) {
+                     CureBudget cureBudget, String service) {
         this.library = library;
         this.selector = selector;
         this.limits = limits;
         this.budget = budget;
+        this.cureBudget = cureBudget;
         this.service = service;
     }
 
@@ -47,15 +62,41 @@ public final class Simulator {
 
     /** As {@link #simulate(Job)}, with field paths under {@code prefix} (for a job nested in a request). */
     public SimulationResult simulate(Job raw, String prefix) {
-        long started = System.nanoTime();
         Job job = JobValidator.validated(raw, library, limits, prefix);
-        String hash = CanonicalJson.sha256(job);
-        ThermalProblem problem = new ProblemBuilder(library).build(job, budget);
-        ModelSelector.Selection selection = selector.solve(problem, job.model());
-        List<CheckResult> checks = Checks.thermal(selection, job.limits());
+        return run(job, job);
+    }
+
+    /**
+     * Answers the MES's release question. The job is hashed as the client sent it (defaults
+     * filled), so the hash equals that of a simulation of the same job, and solved without its
+     * output, which a decision does not need.
+     */
+    public ReleaseAnswer release(ReleaseRequest request) {
+        Job job = JobValidator.validated(request, library, limits);
+        ReleaseAnswer answer = ReleaseAnswer.of(request.batchId(), run(job, job.withOutput(DECISION_ONLY)));
+        LOG.info("release batch={} release={} inputSha256={}", answer.batchId(), answer.release(),
+                answer.inputSha256());
+        return answer;
+    }
+
+    /** Solves {@code solved} and reports it under the hash of {@code hashed}, the same job as sent. */
+    private SimulationResult run(Job hashed, Job solved) {
+        long started = System.nanoTime();
+        String hash = CanonicalJson.sha256(hashed);
+        ThermalProblem problem = new ProblemBuilder(library).build(solved, budget);
+        ModelSelector chosen = solved.slabCells() == null ? selector
+                : selector.withSlab(new SlabModel(solved.slabCells()));
+        ModelSelector.Selection selection = chosen.solve(problem, solved.model());
+        List<CheckResult> checks = new ArrayList<>(Checks.thermal(selection, solved.limits()));
+        CureReport cure = null;
+        if (solved.cure() != null) {
+            CureAssessment assessment = CureAssessment.of(solved.cure(), selection.history(), cureBudget);
+            cure = assessment.report();
+            checks.addAll(assessment.checks());
+        }
         Provenance provenance = new Provenance(service, hash, selection.model().method(),
                 selection.model().tolerance(), selection.history().steps(), selection.history().evaluations());
-        SimulationResult result = ResultAssembler.assemble(job, selection, checks, provenance);
+        SimulationResult result = ResultAssembler.assemble(solved, selection, cure, checks, provenance);
         if (LOG.isInfoEnabled()) {
             LOG.info("solved model={} stages={} steps={} evaluations={} verdict={} ms={}",
                     selection.history().modelName(), problem.stages().size(), selection.history().steps(),

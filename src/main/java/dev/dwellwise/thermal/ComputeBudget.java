@@ -25,6 +25,11 @@ public record ComputeBudget(long maxSteps, long maxEvaluations, int maxSamples, 
         }
     }
 
+    /** The work limits with the default wall-clock limit. */
+    public ComputeBudget(long maxSteps, long maxEvaluations, int maxSamples) {
+        this(maxSteps, maxEvaluations, maxSamples, DEFAULT_MAX_MILLIS);
+    }
+
     public static ComputeBudget standard() {
         return new ComputeBudget(200_000, 5_000_000, 100_000, DEFAULT_MAX_MILLIS);
     }

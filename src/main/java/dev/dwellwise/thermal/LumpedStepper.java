@@ -21,6 +21,9 @@ final class LumpedStepper implements Stepper {
     private final Deadline deadline;
     private final DormandPrince853Integrator integrator;
     private final double faces;
+    /** The layers as arrays: C(T) is evaluated at every right-hand-side call. */
+    private final Material[] materials;
+    private final double[] thicknesses;
     private StageConditions stage;
     private double stageStart;
     private double t;
@@ -35,6 +38,8 @@ final class LumpedStepper implements Stepper {
         this.budget = budget;
         this.deadline = Deadline.startingNow(budget);
         this.faces = part.exposedFaces();
+        this.materials = part.layers().stream().map(Layer::material).toArray(Material[]::new);
+        this.thicknesses = part.layers().stream().mapToDouble(Layer::thicknessM).toArray();
         this.integrator = new DormandPrince853Integrator(1e-9, 1e7,
                 LumpedModel.ABSOLUTE_TOLERANCE, LumpedModel.RELATIVE_TOLERANCE);
         this.temperatureK = part.initialK();
@@ -45,7 +50,11 @@ final class LumpedStepper implements Stepper {
         double elapsed = time - stageStart;
         double q = Physics.surfaceFlux(stage.convection(), stage.airK(elapsed), part.emissivity(),
                 stage.surroundingsK(elapsed), k);
-        return faces * q / part.areaHeatCapacity(k);
+        double capacity = 0;
+        for (int i = 0; i < materials.length; i++) {
+            capacity += materials[i].volumetricHeatCapacity(k) * thicknesses[i];
+        }
+        return faces * q / capacity;
     }
 
     @Override
@@ -169,20 +178,9 @@ final class LumpedStepper implements Stepper {
         }
 
         private double temperatureAt(double time) {
-            // The first piece that ends at or after the time (the last one past the end). Binary
-            // search: a stiff stage can put a hundred thousand steps in one segment, and the runner
-            // reads the segment at every knot, so a linear scan would make the solve quadratic.
-            int lo = 0;
-            int hi = pieces.size() - 1;
-            while (lo < hi) {
-                int mid = (lo + hi) >>> 1;
-                if (knots[mid + 1] >= time) {
-                    hi = mid;
-                } else {
-                    lo = mid + 1;
-                }
-            }
-            StepInterpolator piece = pieces.get(lo);
+            int i = java.util.Arrays.binarySearch(knots, 1, knots.length, time);
+            i = i >= 0 ? i - 1 : Math.min(-i - 2, pieces.size() - 1);
+            StepInterpolator piece = pieces.get(Math.max(0, i));
             piece.setInterpolatedTime(time);
             return piece.getInterpolatedState()[0];
         }

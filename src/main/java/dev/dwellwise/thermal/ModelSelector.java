@@ -1,12 +1,13 @@
 package dev.dwellwise.thermal;
 
+import java.util.Comparator;
 import java.util.Locale;
-import java.util.Optional;
 
 /**
  * Chooses the back end for a problem. {@code auto} first solves the lumped model (cheap) and keeps
  * it where every stage's Biot number, radiation included, is below {@link #BIOT_LIMIT}; otherwise
- * it solves the slab model, when one is installed.
+ * it solves the slab model. A forced {@code lumped} on a part beyond that limit still runs, and the
+ * slab model is solved beside it to say how far apart the surface and core really are.
  */
 public final class ModelSelector {
 
@@ -14,20 +15,31 @@ public final class ModelSelector {
     public static final double BIOT_LIMIT = 0.1;
 
     private final ThermalModel lumped;
-    private final Optional<ThermalModel> slab;
+    private final ThermalModel slab;
 
-    public ModelSelector(ThermalModel lumped, Optional<ThermalModel> slab) {
+    public ModelSelector(ThermalModel lumped, ThermalModel slab) {
         this.lumped = lumped;
         this.slab = slab;
     }
 
-    /** The outcome of a selection: the history of the model used, and why it was chosen. */
-    public record Selection(ThermalHistory history, ThermalModel model, String requested, String reason,
-                            boolean lumpedBeyondValidity) {
+    /** The same selector with another slab back end (a job's own resolution). */
+    public ModelSelector withSlab(ThermalModel otherSlab) {
+        return new ModelSelector(lumped, otherSlab);
     }
 
-    public boolean slabAvailable() {
-        return slab.isPresent();
+    /**
+     * The outcome of a selection.
+     *
+     * @param history              the history of the model used
+     * @param model                the model used
+     * @param requested            {@code auto}, {@code lumped} or {@code slab}
+     * @param reason               why this model, with the number that decided it
+     * @param lumpedBeyondValidity a forced lumped model on a part with Bi >= 0.1
+     * @param throughThicknessSpreadK the largest hottest-minus-coldest difference inside the part over the
+     *                             history, from the slab model; NaN where the slab model was not solved
+     */
+    public record Selection(ThermalHistory history, ThermalModel model, String requested, String reason,
+                            boolean lumpedBeyondValidity, double throughThicknessSpreadK) {
     }
 
     public Selection solve(ThermalProblem problem, String requested) {
@@ -35,30 +47,34 @@ public final class ModelSelector {
             case "lumped" -> {
                 ThermalHistory history = StageRunner.run(problem, lumped);
                 double bi = history.largestBiotNumber();
-                return new Selection(history, lumped, requested, "lumped model requested; largest Biot number "
-                        + format(bi) + (bi < BIOT_LIMIT ? " < " : " >= ") + BIOT_LIMIT, bi >= BIOT_LIMIT);
+                boolean beyond = bi >= BIOT_LIMIT;
+                double spread = beyond ? StageRunner.run(problem, slab).largestSpreadK() : Double.NaN;
+                return new Selection(history, lumped, requested, "lumped model requested; " + decided(history)
+                        + (beyond ? " >= " : " < ") + BIOT_LIMIT, beyond, spread);
             }
             case "slab" -> {
-                ThermalModel model = slab.orElseThrow(() -> new ModelUnavailableException("slab"));
-                return new Selection(StageRunner.run(problem, model), model, requested,
-                        "slab conduction model requested", false);
+                ThermalHistory history = StageRunner.run(problem, slab);
+                return new Selection(history, slab, requested, "slab conduction model requested", false,
+                        history.largestSpreadK());
             }
             default -> {
                 ThermalHistory history = StageRunner.run(problem, lumped);
                 double bi = history.largestBiotNumber();
-                String decided = "largest Biot number " + format(bi) + " (stage '" + history.stageWith(java.util.Comparator.comparingDouble(StageOutcome::biotNumber)).conditions().name()
-                        + "')";
                 if (bi < BIOT_LIMIT) {
-                    return new Selection(history, lumped, requested, decided + " < " + BIOT_LIMIT, false);
+                    return new Selection(history, lumped, requested, decided(history) + " < " + BIOT_LIMIT, false,
+                            Double.NaN);
                 }
-                if (slab.isPresent()) {
-                    return new Selection(StageRunner.run(problem, slab.get()), slab.get(), requested,
-                            decided + " >= " + BIOT_LIMIT + ": through-thickness conduction", false);
-                }
-                return new Selection(history, lumped, requested,
-                        decided + " >= " + BIOT_LIMIT + ", but no slab model is installed", true);
+                ThermalHistory slabHistory = StageRunner.run(problem, slab);
+                return new Selection(slabHistory, slab, requested, decided(history) + " >= " + BIOT_LIMIT
+                        + ": through-thickness conduction", false, slabHistory.largestSpreadK());
             }
         }
+    }
+
+    /** "largest Biot number 0.35 (stage 'bake')", from the lumped history that decided. */
+    private static String decided(ThermalHistory history) {
+        StageOutcome worst = history.stageWith(Comparator.comparingDouble(StageOutcome::biotNumber));
+        return "largest Biot number " + format(worst.biotNumber()) + " (stage '" + worst.conditions().name() + "')";
     }
 
     /** Four significant digits, locale-independent. */

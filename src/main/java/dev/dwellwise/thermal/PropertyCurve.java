@@ -55,6 +55,45 @@ public final class PropertyCurve {
         return values[lo] + f * (values[hi] - values[lo]);
     }
 
+    /**
+     * Slope d(value)/dT, per kelvin: zero for a constant and beyond the table's ends; at a table
+     * point, the slope of the piece above it. The slab's Newton iteration needs it for an exact Jacobian.
+     */
+    public double slopeAt(double temperatureK) {
+        int n = values.length;
+        if (n == 1 || temperatureK < kelvin[0] || temperatureK >= kelvin[n - 1]) {
+            return 0;
+        }
+        int i = Arrays.binarySearch(kelvin, temperatureK);
+        int lo = i >= 0 ? i : -i - 2;
+        return (values[lo + 1] - values[lo]) / (kelvin[lo + 1] - kelvin[lo]);
+    }
+
+    /**
+     * The integral of the property over temperature from {@code fromK} to {@code toK}, exact for the
+     * piecewise-linear curve (trapezoids between table points): for a specific heat, the enthalpy
+     * change per kilogram.
+     */
+    public double integral(double fromK, double toK) {
+        if (values.length == 1) {
+            return values[0] * (toK - fromK);
+        }
+        if (fromK > toK) {
+            return -integral(toK, fromK);
+        }
+        int i = Arrays.binarySearch(kelvin, fromK);
+        int next = i >= 0 ? i + 1 : -i - 1;
+        double sum = 0;
+        double lo = fromK;
+        double atLo = at(fromK);
+        for (; next < kelvin.length && kelvin[next] < toK; next++) {
+            sum += 0.5 * (kelvin[next] - lo) * (atLo + values[next]);
+            lo = kelvin[next];
+            atLo = values[next];
+        }
+        return sum + 0.5 * (toK - lo) * (atLo + at(toK));
+    }
+
     /** Smallest value over a temperature range (the conservative conductivity for a Biot number). */
     public double minimumOver(double lowK, double highK) {
         double min = Math.min(at(lowK), at(highK));

@@ -89,7 +89,8 @@ public final class StageRunner {
             figures.cover(segment, scan, keptEnd);
             largestRate = Math.max(largestRate, figures.largestRate);
             peakK = Math.max(peakK, figures.peakK);
-            sampleInside(segment, segment.start(), keptEnd, index);
+            boolean stageEnds = !Double.isNaN(eventTime) || bound - keptEnd <= SAME_INSTANT;
+            sampleInside(segment, segment.start(), keptEnd, !stageEnds, index);
             takeProfilesUpTo(keptEnd, segment);
             if (!Double.isNaN(eventTime)) {
                 stepper.cutAt(eventTime);
@@ -103,7 +104,7 @@ public final class StageRunner {
         double k = problem.part().effectiveConductivity(lowK, highK);
         double biot = (stage.convection() + figures.largestHr) * problem.part().characteristicLengthM() / k;
         return new StageOutcome(stage, start, endTime, ended, first, last, figures.peakK, figures.largestHr,
-                biot, SteadyState.of(stage, problem.part().emissivity()),
+                biot, SteadyState.of(stage, problem.part().emissivity(), first.meanK()),
                 hold == null ? 0 : hold.accumulated, figures.largestRate);
     }
 
@@ -131,12 +132,17 @@ public final class StageRunner {
         return Double.NaN;
     }
 
-    private void sampleInside(Segment segment, double from, double to, int stageIndex) {
+    /**
+     * Samples at the multiples of the spacing in (from, to), and at {@code to} itself when it is a
+     * plain step end rather than the stage end (whose sample is the next stage's boundary sample).
+     */
+    private void sampleInside(Segment segment, double from, double to, boolean includeEnd, int stageIndex) {
         double dt = problem.sampleSeconds();
+        double last = includeEnd ? to + SAME_INSTANT : to - SAME_INSTANT;
         long k = (long) Math.floor(from / dt) + 1;
-        for (double t = k * dt; t < to - SAME_INSTANT; t = (++k) * dt) {
+        for (double t = k * dt; t < last; t = (++k) * dt) {
             if (t > from + SAME_INSTANT) {
-                series.add(t, segment.at(t), stageIndex);
+                series.add(t, segment.at(Math.min(t, to)), stageIndex);
             }
         }
     }
@@ -231,6 +237,9 @@ public final class StageRunner {
 
     /** Per-stage extremes gathered over the segments, kelvin and K/s. */
     private static final class StageFigures {
+        /** A rise smaller than this (kelvin) between scan points is integration noise, not a peak worth refining. */
+        private static final double PEAK_NOISE = 1e-9;
+
         private final double emissivity;
         private final StageConditions stage;
         private final double stageStart;
@@ -269,7 +278,7 @@ public final class StageRunner {
                 peakK = Math.max(peakK, hot[i]);
             }
             for (int i = 1; i + 1 < times.length; i++) {
-                if (hot[i] >= hot[i - 1] && hot[i] >= hot[i + 1] && hot[i] > Math.min(hot[i - 1], hot[i + 1])) {
+                if (hot[i] > hot[i - 1] + PEAK_NOISE && hot[i] > hot[i + 1] + PEAK_NOISE) {
                     // an interior maximum: refine it between the neighbouring scan points
                     peakK = Math.max(peakK, EventLocator.maximum(t -> segment.at(t).hottestK(),
                             times[i - 1], times[i + 1]));

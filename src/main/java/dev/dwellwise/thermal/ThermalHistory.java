@@ -37,6 +37,19 @@ public record ThermalHistory(String modelName, List<StageOutcome> stages, Sample
         return stageWith(java.util.Comparator.comparingDouble(StageOutcome::biotNumber)).biotNumber();
     }
 
+    /**
+     * The largest difference between the hottest and the coldest point inside the part at any one
+     * instant, kelvin, read at every step end of the dense history (0 for the lumped model).
+     */
+    public double largestSpreadK() {
+        double spread = 0;
+        for (double t : dense.knots()) {
+            Observation o = dense.at(t);
+            spread = Math.max(spread, o.hottestK() - o.coldestK());
+        }
+        return spread;
+    }
+
     /** The first stage that is largest by the comparator (the stage with the largest Biot number, say). */
     public StageOutcome stageWith(java.util.Comparator<StageOutcome> largestBy) {
         StageOutcome best = stages.get(0);

@@ -37,7 +37,7 @@ class BearerAuthTest {
 
     @Test
     void withATokenConfiguredARequestWithoutOneGets401ProblemDetailsWithABearerChallenge() {
-        Http.given(secured).get("/v1/materials").then()
+        Http.given(secured).filter(Contract.strict()).get("/v1/materials").then()
                 .statusCode(401)
                 .contentType("application/problem+json")
                 .header("WWW-Authenticate", startsWith("Bearer"))
@@ -65,16 +65,17 @@ class BearerAuthTest {
 
     @Test
     void aPostIsRefusedBeforeItsBodyIsSolved() {
-        Http.given(secured).contentType("application/json").body(Jobs.PANEL).post("/v1/simulations").then()
+        Http.given(secured).contentType("application/json").body(Workloads.PANEL).post("/v1/simulations").then()
                 .statusCode(401);
     }
 
     @Test
-    void theProbesAndTheMetricsStayOpenWithoutAToken() {
+    void theProbesTheMetricsAndTheContractStayOpenWithoutAToken() {
         Http.given(secured).get("/health/live").then().statusCode(200);
         Http.given(secured).get("/health/ready").then().statusCode(200);
         Http.given(secured).get("/metrics").then().statusCode(200);
         Http.given(secured).get("/metrics/").then().statusCode(200);
+        Http.given(secured).get("/openapi.yaml").then().statusCode(200);
     }
 
     @Test

@@ -25,7 +25,7 @@ class BodyLimitTest {
 
     @Test
     void aBodyOverTheConfiguredLimitGets413ProblemDetails() {
-        String padded = Jobs.PANEL.replace("\"bake\"", "\"bake" + " ".repeat(4096) + "\"");
+        String padded = Workloads.PANEL.replace("\"bake\"", "\"bake" + " ".repeat(4096) + "\"");
         Http.given(service).contentType("application/json").body(padded).post("/v1/simulations").then()
                 .statusCode(413)
                 .contentType("application/problem+json")
@@ -43,7 +43,7 @@ class BodyLimitTest {
 
     @Test
     void aBodyWithinTheLimitIsSolved() {
-        Http.given(service).contentType("application/json").body(Jobs.PANEL).post("/v1/simulations").then()
+        Http.given(service).contentType("application/json").body(Workloads.PANEL).post("/v1/simulations").then()
                 .statusCode(200);
     }
 }

@@ -30,7 +30,7 @@ class ComputeBudgetTest {
 
     @Test
     void aJobThatRunsPastTheBudgetIsStoppedWithAComputeLimitProblem() {
-        Http.given(service).contentType("application/json").body(Jobs.STIFF_FOIL).post("/v1/simulations").then()
+        Http.given(service).contentType("application/json").body(Workloads.STIFF_FOIL).post("/v1/simulations").then()
                 .statusCode(422)
                 .contentType("application/problem+json")
                 .body("type", equalTo(ProblemType.COMPUTE_LIMIT.uri()))

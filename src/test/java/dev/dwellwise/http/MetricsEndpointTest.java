@@ -37,9 +37,9 @@ class MetricsEndpointTest {
 
     @Test
     void aSolveIsTimedByOutcome() {
-        String series = "dwellwise_solve_seconds_count{outcome=\"pass\"}";
+        String series = "dwellwise_solve_seconds_count{kind=\"simulation\",outcome=\"pass\"}";
         double before = value(scrape(), series);
-        Http.given(service).contentType("application/json").body(Jobs.PANEL).post("/v1/simulations").then()
+        Http.given(service).contentType("application/json").body(Workloads.PANEL).post("/v1/simulations").then()
                 .statusCode(200);
         assertEquals(before + 1, value(scrape(), series));
     }
@@ -55,7 +55,7 @@ class MetricsEndpointTest {
 
     @Test
     void theScrapeIsPrometheusTextWithTheJvmAndLatencyBuckets() {
-        Http.given(service).get("/metrics").then()
+        Http.given(service).filter(Contract.strict()).get("/metrics").then()
                 .statusCode(200)
                 .contentType(startsWith("text/plain; version=0.0.4"))
                 .body(containsString("jvm_memory_used_bytes{area=\"heap\""))

@@ -27,7 +27,8 @@ class OverloadTest {
             CompletableFuture<HttpResponse<String>> held = post(service);
             assertTrue(gate.awaitEntered(), "the first solve reached the worker");
 
-            Http.given(service).contentType("application/json").body(Jobs.PANEL).post("/v1/simulations").then()
+            Http.given(service).filter(Contract.responsesOnly()).contentType("application/json")
+                    .body(Workloads.PANEL).post("/v1/simulations").then()
                     .statusCode(503)
                     .contentType("application/problem+json")
                     .header("Retry-After", equalTo(Problems.RETRY_AFTER_SECONDS))
@@ -36,7 +37,7 @@ class OverloadTest {
 
             gate.open();
             assertEquals(200, held.get(Http.TIMEOUT_MILLIS, TimeUnit.MILLISECONDS).statusCode());
-            Http.given(service).contentType("application/json").body(Jobs.PANEL).post("/v1/simulations").then()
+            Http.given(service).contentType("application/json").body(Workloads.PANEL).post("/v1/simulations").then()
                     .statusCode(200);
         } finally {
             gate.open();
@@ -47,7 +48,7 @@ class OverloadTest {
         HttpRequest request = HttpRequest.newBuilder(URI.create(service.url("/v1/simulations")))
                 .timeout(Duration.ofMillis(Http.TIMEOUT_MILLIS * 2L))
                 .header("Content-Type", "application/json")
-                .POST(HttpRequest.BodyPublishers.ofString(Jobs.PANEL)).build();
+                .POST(HttpRequest.BodyPublishers.ofString(Workloads.PANEL)).build();
         return HttpClient.newBuilder().version(HttpClient.Version.HTTP_1_1).connectTimeout(Duration.ofMillis(Http.TIMEOUT_MILLIS)).build()
                 .sendAsync(request, HttpResponse.BodyHandlers.ofString());
     }

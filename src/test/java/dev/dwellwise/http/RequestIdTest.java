@@ -71,7 +71,7 @@ class RequestIdTest {
     void theSolversSummaryLineCarriesTheIdOfItsRequest() {
         try (CapturedLog solver = CapturedLog.of("dev.dwellwise.report.Simulator")) {
             Http.given(service).header("Authorization", "Bearer " + TOKEN).header("X-Request-Id", "solve-1")
-                    .contentType("application/json").body(Jobs.PANEL).post("/v1/simulations").then().statusCode(200);
+                    .contentType("application/json").body(Workloads.PANEL).post("/v1/simulations").then().statusCode(200);
             assertEquals(List.of("solve-1"), solver.requestIds());
         }
     }

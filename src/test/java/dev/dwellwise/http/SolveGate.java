@@ -1,14 +1,15 @@
 package dev.dwellwise.http;
 
+import dev.dwellwise.cure.CureBudget;
 import dev.dwellwise.job.JobLimits;
 import dev.dwellwise.report.Simulator;
 import dev.dwellwise.thermal.ComputeBudget;
 import dev.dwellwise.thermal.LumpedModel;
 import dev.dwellwise.thermal.ModelSelector;
+import dev.dwellwise.thermal.SlabModel;
 import dev.dwellwise.thermal.Stepper;
 import dev.dwellwise.thermal.ThermalModel;
 import dev.dwellwise.thermal.ThermalPart;
-import java.util.Optional;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 
@@ -31,9 +32,10 @@ public final class SolveGate {
     /** The bundled services with a lumped model that waits at this gate. */
     public Services services(ServiceConfig config) {
         Services bundled = Services.bundled(config);
-        ModelSelector selector = new ModelSelector(new HeldModel(new LumpedModel()), Optional.empty());
+        ModelSelector selector = new ModelSelector(new HeldModel(new LumpedModel()), new SlabModel());
         Simulator simulator = new Simulator(bundled.materials(), selector, JobLimits.standard(),
-                ComputeBudget.standard().withMaxMillis(config.computeBudgetMillis()), "dwellwise test");
+                ComputeBudget.standard().withMaxMillis(config.computeBudgetMillis()), CureBudget.standard(),
+                "dwellwise test");
         return new Services(simulator, bundled.materials(), bundled.examples(), bundled.mapper(), bundled.version(),
                 bundled.openApi());
     }

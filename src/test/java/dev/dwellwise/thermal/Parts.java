@@ -13,6 +13,14 @@ final class Parts {
         return Material.constant("steel-1010", "AISI 1010", 7832, 434, 63.9, "Incropera Table A.1 [M]");
     }
 
+    /**
+     * An invented solid with round numbers for the closed-form checks: rho 1200 kg/m3, c 1500 J/kgK,
+     * k 0.6 W/mK, so alpha = 3.33e-7 m2/s and a 10 mm conduction length has L^2/alpha = 300 s.
+     */
+    static Material testSolid() {
+        return Material.constant("test-solid", "invented test solid", 1200, 1500, 0.6, "invented for the tests");
+    }
+
     static ThermalPart plate(Material material, double thicknessM, int faces, double emissivity, double initialC) {
         return new ThermalPart(List.of(new Layer(material, thicknessM)), faces, emissivity,
                 Physics.toKelvin(initialC));

@@ -1,0 +1,148 @@
+package dev.dwellwise.thermal;
+
+import java.util.Arrays;
+
+/**
+ * Steps the slab of {@link SlabModel} with {@link TrBdf2}, one accepted step per {@link #advance}.
+ * Step control on the weighted max norm of the local error estimate: accept when it is at most 1,
+ * next step h · min(5, max(0.2, 0.9 err^(−1/3))) (the estimate is O(h³)), no growth right after a
+ * rejection, a quarter of the step after a Newton failure. A stage starts with a step whose explicit
+ * change would be one error unit: the boundary conditions jump there, and the controller grows it
+ * fivefold per step. State: the cell temperatures, kelvin, and their flux F (reused as the next
+ * step's first stage).
+ */
+final class SlabStepper implements Stepper {
+
+    private static final double SAFETY = 0.9;
+    private static final double MAX_GROWTH = 5;
+    private static final double MAX_SHRINK = 0.2;
+    private static final double NEWTON_FAILURE_SHRINK = 0.25;
+    /** A step that would leave less than a tenth of itself before the limit is stretched to it. */
+    private static final double STRETCH = 1.1;
+
+    private final ThermalPart part;
+    private final SlabGrid grid;
+    private final TrBdf2 method;
+    private final SlabReadout readout;
+    private final ComputeBudget budget;
+    private final double relativeTolerance;
+    private SurfaceExposure exposure;
+    private double t;
+    private double[] y;
+    private TrBdf2.Derivative derivative;
+    private double nextStep = Double.NaN;
+    private long steps;
+    private SlabSegment last;
+
+    SlabStepper(ThermalPart part, SlabGrid grid, double relativeTolerance, ComputeBudget budget) {
+        this.part = part;
+        this.grid = grid;
+        SlabEquations equations = new SlabEquations(grid);
+        this.method = new TrBdf2(equations, relativeTolerance);
+        this.readout = new SlabReadout(equations);
+        this.budget = budget;
+        this.relativeTolerance = relativeTolerance;
+        this.y = new double[grid.cells()];
+        Arrays.fill(y, part.initialK());
+        this.exposure = SurfaceExposure.none(part.initialK());
+    }
+
+    @Override
+    public void enterStage(StageConditions stage) {
+        exposure = new SurfaceExposure(stage, t, part.emissivity());
+        derivative = method.derivative(t, y, exposure);
+        nextStep = Double.NaN;
+    }
+
+    @Override
+    public double time() {
+        return t;
+    }
+
+    @Override
+    public Observation observe() {
+        return readout.observe(t, y, exposure);
+    }
+
+    @Override
+    public Segment advance(double limit) {
+        if (derivative == null) {
+            throw new IllegalStateException("enterStage must come before advance");
+        }
+        if (!(limit > t)) {
+            throw new IllegalArgumentException("the limit " + limit + " s is not after the current time " + t + " s");
+        }
+        if (Double.isNaN(nextStep)) {
+            nextStep = initialStep(limit - t);
+        }
+        boolean rejected = false;
+        while (true) {
+            double remaining = limit - t;
+            double h = nextStep * STRETCH >= remaining ? remaining : nextStep;
+            TrBdf2.Step step = method.attempt(t, h, y, derivative, exposure);
+            checkBudget();
+            if (step == null) {
+                nextStep = h * NEWTON_FAILURE_SHRINK;
+                rejected = true;
+                continue;
+            }
+            // an error of zero (nothing changing) asks for the largest growth, not a division by zero
+            double factor = SAFETY * Math.pow(Math.max(step.errorNorm(), 1e-12), -1.0 / 3);
+            if (step.errorNorm() <= 1) {
+                double end = h == remaining ? limit : t + h;
+                last = new SlabSegment(readout, exposure, t, end, y, derivative.rate(), step.end(),
+                        step.derivative().rate());
+                t = end;
+                y = step.end();
+                derivative = step.derivative();
+                steps++;
+                nextStep = h * Math.min(rejected ? 1 : MAX_GROWTH, Math.max(MAX_SHRINK, factor));
+                return last;
+            }
+            nextStep = h * Math.max(MAX_SHRINK, factor);
+            rejected = true;
+        }
+    }
+
+    /** The step whose explicit change dT/dt · h would be one error unit in the fastest cell. */
+    private double initialStep(double remaining) {
+        double fastest = 0;
+        double[] rate = derivative.rate();
+        for (int i = 0; i < y.length; i++) {
+            double weight = relativeTolerance * y[i];
+            fastest = Math.max(fastest, Math.abs(rate[i]) / weight);
+        }
+        return fastest > 0 ? Math.min(remaining, 1 / fastest) : remaining;
+    }
+
+    private void checkBudget() {
+        if (method.solves() > budget.maxEvaluations()) {
+            throw new ComputeLimitExceededException(ComputeLimitExceededException.Limit.EVALUATIONS,
+                    "the solve needed more than " + budget.maxEvaluations() + " evaluations");
+        }
+    }
+
+    /** Back to the interpolated state at {@code time}; its flux is evaluated afresh for the next step. */
+    @Override
+    public void cutAt(double time) {
+        y = last.cellsAt(time);
+        t = time;
+        derivative = method.derivative(t, y, exposure);
+    }
+
+    @Override
+    public long steps() {
+        return steps;
+    }
+
+    /** Tridiagonal (Newton and error-filter) solves. */
+    @Override
+    public long evaluations() {
+        return method.solves();
+    }
+
+    @Override
+    public double[] profilePositionsM() {
+        return grid.profilePositionsM();
+    }
+}

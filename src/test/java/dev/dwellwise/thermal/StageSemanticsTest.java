@@ -1,0 +1,245 @@
+package dev.dwellwise.thermal;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The "precise semantics" of DESIGN.md section 3 that clients rely on: one clock, samples on absolute
+ * multiples plus boundaries, conditions already met, holds counted from the stage start, conditions
+ * never met, ramps. Expected values are closed forms of the lumped convection model
+ * (T = T_air − (T_air − T_i) e^(−t/tau), Incropera Eqs. 5.6–5.7 [M]) or follow from the definitions.
+ */
+class StageSemanticsTest {
+
+    private static final Material STEEL = Parts.steel1010();
+    private static final double K = Physics.KELVIN_OFFSET;
+
+    private static ThermalHistory run(ThermalPart part, double sample, StageConditions... stages) {
+        return StageRunner.run(Parts.problem(part, sample, stages), new LumpedModel());
+    }
+
+    @Test
+    void samplesFallOnAbsoluteMultiplesAndEachBoundaryAppearsOnceWithTheStageStartingThere() {
+        ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0, 20);
+        ThermalHistory h = run(part, 10,
+                Parts.stage("a", 200, 200, 30, new EndCondition.AfterDuration(25), 25),
+                Parts.stage("b", 200, 200, 30, new EndCondition.AfterDuration(20), 20));
+        assertArrayEquals(new double[] {0, 10, 20, 25, 30, 40, 45}, h.series().timeSeconds(), 1e-12);
+        assertArrayEquals(new int[] {0, 0, 0, 1, 1, 1, 1}, h.series().stageIndex());
+        assertEquals(45, h.totalSeconds(), 1e-12);
+    }
+
+    @Test
+    void aSampleOnAStepEndInsideAStageIsKeptExactlyOnce() {
+        // a stepper whose steps end on sample times must not lose those samples
+        ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0, 20);
+        ThermalProblem p = Parts.problem(part, 5,
+                Parts.stage("a", 200, 200, 30, new EndCondition.AfterDuration(30), 30));
+        ThermalModel fixedSteps = new ThermalModel() {
+            @Override
+            public String name() {
+                return "lumped";
+            }
+
+            @Override
+            public String method() {
+                return "lumped in windows of exactly 5 s";
+            }
+
+            @Override
+            public double tolerance() {
+                return LumpedModel.RELATIVE_TOLERANCE;
+            }
+
+            @Override
+            public Stepper newStepper(ThermalPart thermalPart, ComputeBudget budget) {
+                Stepper inner = new LumpedModel().newStepper(thermalPart, budget);
+                return new Stepper() {
+                    public void enterStage(StageConditions stage) {
+                        inner.enterStage(stage);
+                    }
+
+                    public double time() {
+                        return inner.time();
+                    }
+
+                    public Observation observe() {
+                        return inner.observe();
+                    }
+
+                    public Segment advance(double limit) {
+                        return inner.advance(Math.min(limit, inner.time() + 5));
+                    }
+
+                    public void cutAt(double t) {
+                        inner.cutAt(t);
+                    }
+
+                    public long steps() {
+                        return inner.steps();
+                    }
+
+                    public long evaluations() {
+                        return inner.evaluations();
+                    }
+
+                    public double[] profilePositionsM() {
+                        return inner.profilePositionsM();
+                    }
+                };
+            }
+        };
+        ThermalHistory h = StageRunner.run(p, fixedSteps);
+        assertArrayEquals(new double[] {0, 5, 10, 15, 20, 25, 30}, h.series().timeSeconds(), 1e-9);
+    }
+
+    @Test
+    void aConditionAlreadyMetAtTheStageStartEndsTheStageAtOnce() {
+        ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0, 150);
+        ThermalHistory h = run(part, 10,
+                Parts.stage("already hot", 200, 200, 30, new EndCondition.ColdestReaches(K + 100), 600),
+                Parts.stage("then", 200, 200, 30, new EndCondition.AfterDuration(10), 10));
+        StageOutcome first = h.stages().get(0);
+        assertEquals(StageEnd.REACHED, first.ended());
+        assertEquals(0, first.endSeconds(), 0);
+        assertEquals(0, h.stages().get(1).startSeconds(), 0);
+    }
+
+    @Test
+    void aHoldCountsFromTheStageStartWhenThePartIsAlreadyAbove() {
+        ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0, 190);
+        ThermalHistory h = run(part, 10,
+                Parts.stage("hold", 200, 200, 30, new EndCondition.HoldAbove(K + 180, 300), 3600));
+        assertEquals(StageEnd.HOLD_COMPLETE, h.stages().get(0).ended());
+        assertEquals(300, h.stages().get(0).endSeconds(), 1e-9);
+    }
+
+    @Test
+    void aHoldCompletesAtTheCrossingTimePlusTheHoldSeconds() {
+        // tau = rho c Lc / h = 113.303 s (REFERENCES.md section 2 [C]); 180 C crossing at tau ln 9
+        ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0, 20);
+        ThermalHistory h = run(part, 10,
+                Parts.stage("hold", 200, 200, 30, new EndCondition.HoldAbove(K + 180, 600), 3600));
+        double tau = 7832 * 434 * 0.001 / 30;
+        assertEquals(tau * Math.log(9) + 600, h.stages().get(0).endSeconds(), 1e-6);
+        assertEquals(600, h.stages().get(0).holdSecondsAccumulated(), 1e-9);
+    }
+
+    @Test
+    void aHoldInterruptedByCoolingKeepsTheTimeAlreadyAccumulatedAcrossTheDip() {
+        // air ramps down through the hold temperature and back up: the time above is the sum of
+        // both spells, never the last spell alone
+        ThermalPart part = Parts.plate(STEEL, 0.0005, 2, 0, 190);
+        StageConditions dip = new StageConditions("dip", K + 150, K + 150, K + 150, K + 150, 60,
+                new EndCondition.AfterDuration(40), 40);
+        ThermalHistory h = run(part, 1,
+                Parts.stage("warm", 200, 200, 60, new EndCondition.AfterDuration(10), 10), dip,
+                Parts.stage("hold", 200, 200, 60, new EndCondition.HoldAbove(K + 185, 30), 3600));
+        StageOutcome hold = h.stages().get(2);
+        assertEquals(StageEnd.HOLD_COMPLETE, hold.ended());
+        assertTrue(hold.endSeconds() - hold.startSeconds() > 30, "had to re-heat first");
+    }
+
+    @Test
+    void aTargetNeverReachedEndsAtMaxSecondsAndReportsTheSteadyTemperature() {
+        ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0.9, 20);
+        ThermalHistory h = run(part, 60,
+                Parts.stage("too cool", 170, 170, 30, new EndCondition.ColdestReaches(K + 180), 1800),
+                Parts.stage("next", 20, 20, 10, new EndCondition.AfterDuration(60), 60));
+        StageOutcome s = h.stages().get(0);
+        assertEquals(StageEnd.MAX_SECONDS, s.ended());
+        assertEquals(1800, s.endSeconds(), 1e-9);
+        assertEquals(K + 170, s.steadyK(), 1e-9, "air and surroundings equal: steady at the air temperature");
+        assertEquals(1860, h.totalSeconds(), 1e-9, "the later stages still run");
+    }
+
+    @Test
+    void theSteadyTemperatureBalancesConvectionAgainstColderSurroundings() {
+        // root of h (Ta - T) + eps sigma (Ts^4 - T^4) = 0, checked by putting it back into the balance
+        double steady = SteadyState.temperatureK(20, K + 200, 0.9, K + 100, K + 20);
+        assertTrue(steady > K + 100 && steady < K + 200);
+        assertEquals(0, Physics.surfaceFlux(20, K + 200, 0.9, K + 100, steady), 1e-8);
+    }
+
+    @Test
+    void withNoHeatExchangeThePartKeepsItsTemperatureAndThatIsItsSteadyTemperature() {
+        ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0, 20);
+        ThermalHistory h = run(part, 10,
+                Parts.stage("insulated transfer", 100, 100, 0, new EndCondition.ColdestReaches(K + 50), 600));
+        StageOutcome s = h.stages().get(0);
+        assertEquals(StageEnd.MAX_SECONDS, s.ended());
+        assertEquals(K + 20, s.end().meanK(), 1e-9);
+        assertEquals(K + 20, s.steadyK(), 1e-9);
+    }
+
+    @Test
+    void aRampStageFollowsTheLinearAirTemperatureAndItsSteadyUsesTheEndValues() {
+        // with no radiation and h large the part tracks the ramp one time constant behind:
+        // T(t) = Ta(t) - r tau (1 - e^(-t/tau)) for Ta(t) = T0 + r t starting at T0 (linear ODE, exact)
+        ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0, 20);
+        StageConditions ramp = new StageConditions("ramp", K + 20, K + 140, K + 20, K + 140, 30,
+                new EndCondition.AfterDuration(600), 600);
+        ThermalHistory h = run(part, 50, ramp);
+        double tau = 7832 * 434 * 0.001 / 30;
+        double r = 120.0 / 600;
+        double[] t = h.series().timeSeconds();
+        double[] temp = h.series().meanK();
+        for (int i = 0; i < t.length; i++) {
+            double exact = K + 20 + r * t[i] - r * tau * (1 - Math.exp(-t[i] / tau));
+            assertEquals(exact, temp[i], 1e-6, "t = " + t[i]);
+        }
+        assertEquals(K + 140, h.stages().get(0).steadyK(), 1e-9);
+    }
+
+    @Test
+    void theLargestRadiationCoefficientAndBiotNumberFollowTheirDefinitions() {
+        // h_r = eps sigma (T + Tsur)(T^2 + Tsur^2) (Incropera Eq. 1.9 [M]); REFERENCES.md section 2 [C]:
+        // 20.290 W/m2K at 453.15 K against 473.15 K surroundings for eps 0.9
+        assertEquals(20.290, Physics.radiationCoefficient(0.9, 453.15, 473.15), 5e-4);
+        ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0.9, 20);
+        ThermalHistory h = run(part, 10,
+                Parts.stage("bake", 200, 200, 30, new EndCondition.ColdestReaches(453.15), 3600));
+        StageOutcome s = h.stages().get(0);
+        assertEquals(Physics.radiationCoefficient(0.9, 453.15, 473.15), s.largestRadiationCoefficient(), 1e-6);
+        double k = STEEL.conductivity().minimumOver(293.15, 453.15);
+        assertEquals((30 + s.largestRadiationCoefficient()) * 0.001 / k, s.biotNumber(), 1e-12);
+    }
+
+    @Test
+    void thePeakInsideARampDownIsFoundBetweenSamples() {
+        // the air falls through the part's temperature mid-stage: the part peaks where T = T_air,
+        // between steps; the peak must exceed every sample and the stage ends
+        ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0, 100);
+        StageConditions ramp = new StageConditions("over the top", K + 200, K + 20, K + 200, K + 20, 30,
+                new EndCondition.AfterDuration(900), 900);
+        ThermalHistory h = run(part, 300, ramp);
+        double sampledMax = 0;
+        for (double v : h.series().meanK()) {
+            sampledMax = Math.max(sampledMax, v);
+        }
+        assertTrue(h.peakK() > sampledMax + 1, "peak " + h.peakK() + " vs samples " + sampledMax);
+        // the peak lies on the air line: T(t*) = Ta(t*) where dT/dt = 0; find t* from the dense history
+        DenseHistory d = h.dense();
+        double best = 0;
+        for (double t = 0; t <= 900; t += 0.01) {
+            best = Math.max(best, d.at(t).hottestK());
+        }
+        assertEquals(best, h.peakK(), 1e-6);
+    }
+
+    @Test
+    void profileTimesAreHonouredWithUniformProfilesForTheLumpedModel() {
+        ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0, 20);
+        ThermalProblem p = new ThermalProblem(part, List.of(
+                Parts.stage("bake", 200, 200, 30, new EndCondition.AfterDuration(300), 300)), 10,
+                ComputeBudget.standard(), List.of(0.0, 100.0));
+        ThermalHistory h = StageRunner.run(p, new LumpedModel());
+        assertEquals(2, h.profiles().size());
+        double tau = 7832 * 434 * 0.001 / 30;
+        assertEquals(K + 200 - 180 * Math.exp(-100 / tau), h.profiles().get(1).temperaturesK()[0], 1e-6);
+    }
+}
