@@ -13,10 +13,10 @@ final class HttpServerSettings {
     private static final int MIN_THREADS = 8;
     private static final int IDLE_TIMEOUT_MILLIS = 60_000;
     /**
-     * After the grace period, how long the stop waits for threads still busy (a solve does not
-     * heed interrupts; its compute budget ends it) before giving up on them.
+     * After the graceful phase, Jetty gives its thread pool what is left of the grace period, and at
+     * least this long, to finish the threads still busy (Server.doStop in Jetty 12.1).
      */
-    static final int POOL_STOP_MILLIS = 2_000;
+    static final int POOL_STOP_MIN_MILLIS = 1_000;
 
     private HttpServerSettings() {
     }
@@ -30,7 +30,6 @@ final class HttpServerSettings {
         int max = config.workerThreads() + config.queueSize() + HEADROOM_THREADS;
         QueuedThreadPool pool = new QueuedThreadPool(max, Math.min(MIN_THREADS, max), IDLE_TIMEOUT_MILLIS);
         pool.setName("dwellwise-http");
-        pool.setStopTimeout(POOL_STOP_MILLIS);
         return pool;
     }
 

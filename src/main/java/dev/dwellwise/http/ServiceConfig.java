@@ -95,11 +95,11 @@ public record ServiceConfig(String host, int port, int workerThreads, int queueS
     }
 
     /**
-     * The longest a stop can take: the grace period for the requests in flight, then the HTTP
-     * pool's own wait for threads still busy. The orchestrator's grace period must exceed it.
+     * The longest a stop can take: the grace period for the requests in flight, then at least a
+     * second more for the HTTP threads still busy. The orchestrator's grace period must exceed it.
      */
     public int longestStopSeconds() {
-        return shutdownGraceSeconds + (HttpServerSettings.POOL_STOP_MILLIS + 999) / 1000;
+        return shutdownGraceSeconds + (HttpServerSettings.POOL_STOP_MIN_MILLIS + 999) / 1000;
     }
 
     /** Never prints the token. */
