@@ -4,15 +4,16 @@ import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.math3.exception.MaxCountExceededException;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
+import org.apache.commons.math3.ode.events.EventHandler;
 import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
 import org.apache.commons.math3.ode.sampling.StepHandler;
 import org.apache.commons.math3.ode.sampling.StepInterpolator;
 
 /**
  * Steps the lumped balance of {@link LumpedModel} with Commons Math. The integrator drives its own
- * loop, so each {@link #advance} integrates a window of about twice the last accepted step and
- * keeps copies of the step interpolators as the dense output; the window end is a step end, so no
- * accuracy is lost at it. State: y[0] = T, kelvin.
+ * loop, so each {@link #advance} is one integration call, to the limit or to the runner's stop
+ * signal (a Commons Math event handler), keeping copies of the step interpolators as the dense
+ * output. State: y[0] = T, kelvin.
  */
 final class LumpedStepper implements Stepper {
 
@@ -28,10 +29,20 @@ final class LumpedStepper implements Stepper {
     private double stageStart;
     private double t;
     private double temperatureK;
-    private double nextWindow;
     private long steps;
     private long evaluations;
     private LumpedSegment last;
+    private final FirstOrderDifferentialEquations equations = new FirstOrderDifferentialEquations() {
+        @Override
+        public int getDimension() {
+            return 1;
+        }
+
+        @Override
+        public void computeDerivatives(double time, double[] state, double[] derivative) {
+            derivative[0] = rate(time, state[0]);
+        }
+    };
 
     LumpedStepper(ThermalPart part, ComputeBudget budget) {
         this.part = part;
@@ -61,7 +72,6 @@ final class LumpedStepper implements Stepper {
     public void enterStage(StageConditions conditions) {
         this.stage = conditions;
         this.stageStart = t;
-        this.nextWindow = Double.NaN; // the rate may jump at a boundary: let the integrator estimate
     }
 
     @Override
@@ -76,10 +86,18 @@ final class LumpedStepper implements Stepper {
 
     @Override
     public Segment advance(double limit) {
-        double window = Double.isNaN(nextWindow) ? limit - t : Math.min(nextWindow, limit - t);
-        double end = window >= limit - t ? limit : t + window;
+        return advance(limit, StopSignal.NONE);
+    }
+
+    /**
+     * Integrates to {@code limit} in one call, or until {@code stop} rises through zero: a Commons
+     * Math event handler ends the integration just after that root, so a stage costs one call.
+     */
+    @Override
+    public Segment advance(double limit, StopSignal stop) {
         List<StepInterpolator> pieces = new ArrayList<>();
         integrator.clearStepHandlers();
+        integrator.clearEventHandlers();
         integrator.addStepHandler(new StepHandler() {
             @Override
             public void init(double t0, double[] y0, double tEnd) {
@@ -87,40 +105,31 @@ final class LumpedStepper implements Stepper {
 
             @Override
             public void handleStep(StepInterpolator interpolator, boolean isLast) {
-                deadline.check(); // a window can hold thousands of steps: stop inside it
+                deadline.check(); // one call can hold thousands of steps: stop inside it
+                if (steps + pieces.size() >= budget.maxSteps()) {
+                    throw new ComputeLimitExceededException(ComputeLimitExceededException.Limit.STEPS,
+                            "the solve needed more than " + budget.maxSteps() + " steps");
+                }
                 pieces.add(interpolator.copy());
             }
         });
-        integrator.setInitialStepSize(Double.isNaN(nextWindow) ? -1 : window);
+        if (stop != StopSignal.NONE) {
+            integrator.addEventHandler(new StopAt(stop), Double.POSITIVE_INFINITY, EVENT_CONVERGENCE, 100);
+        }
         integrator.setMaxEvaluations((int) Math.max(1, Math.min(Integer.MAX_VALUE,
                 budget.maxEvaluations() - evaluations)));
         double[] y = {temperatureK};
-        FirstOrderDifferentialEquations equations = new FirstOrderDifferentialEquations() {
-            @Override
-            public int getDimension() {
-                return 1;
-            }
-
-            @Override
-            public void computeDerivatives(double time, double[] state, double[] derivative) {
-                derivative[0] = rate(time, state[0]);
-            }
-        };
+        double reached;
         try {
-            integrator.integrate(equations, t, y, end, y);
+            reached = integrator.integrate(equations, t, y, limit, y);
         } catch (MaxCountExceededException e) {
             throw new ComputeLimitExceededException(ComputeLimitExceededException.Limit.EVALUATIONS,
                     "the solve needed more than " + budget.maxEvaluations() + " evaluations");
         }
         evaluations += integrator.getEvaluations();
         steps += pieces.size();
-        double longest = 0;
-        for (StepInterpolator piece : pieces) {
-            longest = Math.max(longest, piece.getCurrentTime() - piece.getPreviousTime());
-        }
-        nextWindow = 2 * longest;
         last = new LumpedSegment(pieces, this::rate);
-        t = end;
+        t = reached;
         temperatureK = y[0];
         return last;
     }
@@ -146,7 +155,37 @@ final class LumpedStepper implements Stepper {
         return new double[] {0, part.thicknessM()};
     }
 
-    /** Dense output of one window: the Commons Math step interpolators, one per accepted step. */
+    /** Event time accuracy of the early stop, seconds; the runner places the event itself far finer. */
+    private static final double EVENT_CONVERGENCE = 1e-6;
+
+    /** Ends the integration where the runner's stop signal rises through zero. */
+    private static final class StopAt implements EventHandler {
+        private final StopSignal stop;
+
+        StopAt(StopSignal stop) {
+            this.stop = stop;
+        }
+
+        @Override
+        public void init(double t0, double[] y0, double t) {
+        }
+
+        @Override
+        public double g(double time, double[] y) {
+            return stop.value(Observation.uniform(y[0]));
+        }
+
+        @Override
+        public Action eventOccurred(double time, double[] y, boolean increasing) {
+            return increasing ? Action.STOP : Action.CONTINUE;
+        }
+
+        @Override
+        public void resetState(double time, double[] y) {
+        }
+    }
+
+    /** Dense output of one call: the Commons Math step interpolators, one per accepted step. */
     private static final class LumpedSegment implements Segment {
         private final List<StepInterpolator> pieces;
         private final double[] knots;
@@ -178,11 +217,24 @@ final class LumpedStepper implements Stepper {
         }
 
         private double temperatureAt(double time) {
-            int i = java.util.Arrays.binarySearch(knots, 1, knots.length, time);
-            i = i >= 0 ? i - 1 : Math.min(-i - 2, pieces.size() - 1);
-            StepInterpolator piece = pieces.get(Math.max(0, i));
+            StepInterpolator piece = pieces.get(pieceAt(time));
             piece.setInterpolatedTime(time);
             return piece.getInterpolatedState()[0];
+        }
+
+        /** The piece that holds {@code time}: a scan for the usual few pieces, a binary search for many. */
+        private int pieceAt(double time) {
+            int n = pieces.size();
+            if (n <= 8) {
+                int i = 0;
+                while (i < n - 1 && time > knots[i + 1]) {
+                    i++;
+                }
+                return i;
+            }
+            int i = java.util.Arrays.binarySearch(knots, 1, knots.length, time);
+            i = i >= 0 ? i - 1 : Math.min(-i - 2, n - 1);
+            return Math.max(0, i);
         }
 
         @Override

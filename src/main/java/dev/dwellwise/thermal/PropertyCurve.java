@@ -45,11 +45,10 @@ public final class PropertyCurve {
         if (temperatureK >= kelvin[n - 1]) {
             return values[n - 1];
         }
-        int i = Arrays.binarySearch(kelvin, temperatureK);
-        if (i >= 0) {
-            return values[i];
+        int hi = 1;
+        while (kelvin[hi] < temperatureK) { // handbook tables have a few columns: a scan beats a search
+            hi++;
         }
-        int hi = -i - 1;
         int lo = hi - 1;
         double f = (temperatureK - kelvin[lo]) / (kelvin[hi] - kelvin[lo]);
         return values[lo] + f * (values[hi] - values[lo]);

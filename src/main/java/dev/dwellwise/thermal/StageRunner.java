@@ -75,12 +75,19 @@ public final class StageRunner {
             ended = StageEnd.HOLD_COMPLETE;
         }
         while (ended == null) {
-            if (bound - stepper.time() <= SAME_INSTANT) {
+            if (tooShort(stepper.time(), bound)) {
                 ended = stage.end() instanceof EndCondition.AfterDuration
                         ? StageEnd.DURATION : StageEnd.MAX_SECONDS;
                 break;
             }
-            Segment segment = stepper.advance(bound);
+            if (hold != null && hold.above && tooShort(stepper.time(), stepper.time() + hold.remaining())) {
+                ended = StageEnd.HOLD_COMPLETE; // what is left of the hold is below any time resolution
+                hold.accumulated = hold.required;
+                break;
+            }
+            Segment segment = hold != null && hold.above
+                    ? stepper.advance(Math.min(bound, stepper.time() + hold.remaining()), hold.stopSignal())
+                    : stepper.advance(bound, stopSignal(stage.end(), hold));
             checkBudget();
             double[] scan = scanPoints(segment);
             double eventTime = findEvent(stage.end(), hold, segment, scan);
@@ -89,7 +96,7 @@ public final class StageRunner {
             figures.cover(segment, scan, keptEnd);
             largestRate = Math.max(largestRate, figures.largestRate);
             peakK = Math.max(peakK, figures.peakK);
-            boolean stageEnds = !Double.isNaN(eventTime) || bound - keptEnd <= SAME_INSTANT;
+            boolean stageEnds = !Double.isNaN(eventTime) || tooShort(keptEnd, bound);
             sampleInside(segment, segment.start(), keptEnd, !stageEnds, index);
             takeProfilesUpTo(keptEnd, segment);
             if (!Double.isNaN(eventTime)) {
@@ -108,6 +115,14 @@ public final class StageRunner {
                 hold == null ? 0 : hold.accumulated, figures.largestRate);
     }
 
+    /**
+     * Whether the span from {@code from} to {@code to} is too short to integrate: below a nanosecond,
+     * or below the relative resolution of a time on the clock (the integrator refuses such spans).
+     */
+    private static boolean tooShort(double from, double to) {
+        return to - from <= SAME_INSTANT + 1e-11 * Math.abs(to);
+    }
+
     private static boolean alreadyMet(EndCondition end, Observation o) {
         if (end instanceof EndCondition.ColdestReaches c) {
             return o.coldestK() >= c.kelvin();
@@ -116,6 +131,17 @@ public final class StageRunner {
             return o.hottestK() <= c.kelvin();
         }
         return false;
+    }
+
+    /** Where the stepper may stop early: the stage's condition, or the hold's next crossing. */
+    private static StopSignal stopSignal(EndCondition end, HoldClock hold) {
+        if (end instanceof EndCondition.ColdestReaches c) {
+            return o -> o.coldestK() - c.kelvin();
+        }
+        if (end instanceof EndCondition.HottestFallsTo c) {
+            return o -> c.kelvin() - o.hottestK();
+        }
+        return hold != null ? hold.stopSignal() : StopSignal.NONE;
     }
 
     /** The first time in the segment at which the stage's condition is met, or NaN. */
@@ -192,6 +218,8 @@ public final class StageRunner {
      * reaches the required hold.
      */
     private static final class HoldClock {
+        /** Kelvin below the hold temperature at which a stepper may stop: a fall, not the touch at entry. */
+        private static final double CROSSING_MARGIN = 1e-9;
         private final double kelvin;
         private final double required;
         private double accumulated;
@@ -205,6 +233,16 @@ public final class StageRunner {
 
         boolean isComplete() {
             return above && required <= 0;
+        }
+
+        /** Hold time still to go, seconds. */
+        double remaining() {
+            return required - accumulated;
+        }
+
+        /** The next crossing of the hold temperature: falling below it while above, rising to it while below. */
+        StopSignal stopSignal() {
+            return above ? o -> kelvin - o.coldestK() - CROSSING_MARGIN : o -> o.coldestK() - kelvin;
         }
 
         /** Walks the scan points; returns the completion time inside them, or NaN. */
@@ -224,9 +262,10 @@ public final class StageRunner {
                     continue;
                 }
                 double completes = enter + (required - accumulated);
-                if (completes <= leave) {
+                if (completes <= leave + SAME_INSTANT) {
+                    // the window may end on the completion time itself, give or take rounding
                     accumulated = required;
-                    return completes;
+                    return Math.min(completes, leave);
                 }
                 accumulated += leave - enter;
                 above = aboveAtQ;

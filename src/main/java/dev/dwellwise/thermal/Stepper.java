@@ -24,6 +24,14 @@ public interface Stepper {
      */
     Segment advance(double limit);
 
+    /**
+     * As {@link #advance(double)}, but the stepper may cover many steps in one segment and end it
+     * where {@code stop} rises through zero. Back ends that step one at a time keep the default.
+     */
+    default Segment advance(double limit, StopSignal stop) {
+        return advance(limit);
+    }
+
     /** Moves the state back to {@code t} inside the last segment: an event ended the stage there. */
     void cutAt(double t);
 

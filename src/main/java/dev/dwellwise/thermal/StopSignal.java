@@ -1,0 +1,18 @@
+package dev.dwellwise.thermal;
+
+/**
+ * A hint from the stage runner to a stepper: the stage's condition, as a function of the part's
+ * temperatures that rises through zero where the condition becomes met. A stepper that can stop
+ * there ends its segment at (or just after) that point instead of running on to its limit; the
+ * runner still places the event itself on the dense output, so honouring the hint saves work and
+ * never changes an answer.
+ */
+@FunctionalInterface
+public interface StopSignal {
+
+    /** No condition: run to the limit. */
+    StopSignal NONE = o -> -1;
+
+    /** Below zero while the condition is not met. */
+    double value(Observation o);
+}
