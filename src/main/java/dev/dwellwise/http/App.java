@@ -104,9 +104,7 @@ public final class App {
                     summary(e.errors()), e.errors()));
             cfg.routes.exception(ComputeLimitExceededException.class, (e, ctx) -> problems.write(ctx,
                     ProblemType.COMPUTE_LIMIT, e.getMessage(), List.of(new FieldError(limitField(ctx, e),
-                            e.getMessage() + (e.limit() == ComputeLimitExceededException.Limit.SAMPLES
-                                    ? "; raise output.sampleSeconds or set output.series to false"
-                                    : "; shorten the stages or give them smaller maxSeconds")))));
+                            e.getMessage() + advice(e.limit())))));
             cfg.routes.exception(CureComputationException.class, (e, ctx) -> problems.write(ctx,
                     ProblemType.COMPUTE_LIMIT, e.getMessage(), List.of(new FieldError(jobPrefix(ctx) + "cure",
                             e.getMessage() + "; check the cure spec's parameters against the coating's data"))));
@@ -168,6 +166,14 @@ public final class App {
     private static String jobPrefix(Context ctx) {
         String prefix = ctx.attribute(SimulationRoutes.JOB_PREFIX);
         return prefix == null ? "" : prefix;
+    }
+
+    private static String advice(ComputeLimitExceededException.Limit limit) {
+        return switch (limit) {
+            case SAMPLES -> "; raise output.sampleSeconds or set output.series to false";
+            case UNRESOLVED -> "; check the job for a near-massless layer or an extreme convection coefficient";
+            default -> "; shorten the stages or give them smaller maxSeconds";
+        };
     }
 
     private static String limitField(Context ctx, ComputeLimitExceededException e) {

@@ -8,6 +8,11 @@ import java.util.List;
  */
 final class CureValidator extends FieldChecks {
 
+    /** Far above published cure kinetics (ln A near 25 per second for an epoxy-anhydride); bounds the stiffness. */
+    private static final double MAX_PRE_EXPONENTIAL = 1e30;
+    /** Far above published thermoset activation energies (about 40 to 150 kJ/mol). */
+    private static final double MAX_ACTIVATION_KJ_PER_MOL = 1000;
+
     private static final String NEVER_FULL_CURE = "cannot be met: with a reaction order of 1 or more the rate law "
             + "only approaches full cure and never reaches it; ";
 
@@ -123,6 +128,11 @@ final class CureValidator extends FieldChecks {
             add(field, "must be above 0 (a rate constant of 0 never cures)");
             return false;
         }
+        if (value > MAX_PRE_EXPONENTIAL) {
+            add(field, "must be at most 1e30 per second: beyond any published cure kinetics, and too stiff to "
+                    + "integrate within the compute budget");
+            return false;
+        }
         return true;
     }
 
@@ -132,6 +142,11 @@ final class CureValidator extends FieldChecks {
         }
         if (value < 0) {
             add(field, "must be 0 or more kJ/mol: a negative activation energy would cure faster when colder");
+            return false;
+        }
+        if (value > MAX_ACTIVATION_KJ_PER_MOL) {
+            add(field, "must be at most 1000 kJ/mol: beyond any published cure kinetics (thermosets lie near "
+                    + "40 to 150 kJ/mol)");
             return false;
         }
         return true;

@@ -114,7 +114,8 @@ public final class Checks {
     }
 
     static CheckResult peakTemperature(ThermalHistory history, double limitC) {
-        double peakC = Physics.toCelsius(history.peakK());
+        // judged on the figure as reported, so the value and the verdict never disagree
+        double peakC = Rounding.temperature(Physics.toCelsius(history.peakK()));
         String where = " (stage '" + history.stageWith(Comparator.comparingDouble(StageOutcome::peakK)).conditions().name() + "')";
         boolean ok = peakC <= limitC;
         String detail = ok
@@ -122,11 +123,11 @@ public final class Checks {
                 : "hottest point peaked at " + c1(peakC) + where + ", " + k1(peakC - limitC) + " over the "
                         + c1(limitC) + " limit: over-bake risk; lower the air temperature or shorten the stage";
         return new CheckResult("peak-temperature", ok ? CheckResult.PASS : CheckResult.FAIL,
-                Rounding.temperature(peakC), limitC, detail, null);
+                peakC, limitC, detail, null);
     }
 
     static CheckResult handlingTemperature(ThermalHistory history, double limitC) {
-        double endC = Physics.toCelsius(history.finalState().hottestK());
+        double endC = Rounding.temperature(Physics.toCelsius(history.finalState().hottestK()));
         boolean ok = endC <= limitC;
         String detail = ok
                 ? "parts leave the last stage at " + c1(endC) + " at the hottest point, at or below the "
@@ -134,18 +135,18 @@ public final class Checks {
                 : "parts leave the last stage at " + c1(endC) + " at the hottest point, above the " + c1(limitC)
                         + " handling limit: contact-burn risk; extend the cooling stage or add forced-air cooling";
         return new CheckResult("handling-temperature", ok ? CheckResult.PASS : CheckResult.FAIL,
-                Rounding.temperature(endC), limitC, detail, null);
+                endC, limitC, detail, null);
     }
 
     static CheckResult heatingRate(ThermalHistory history, double limitCPerMin) {
         StageOutcome fastest = history.stageWith(Comparator.comparingDouble(StageOutcome::largestHeatingRate));
-        double rate = history.largestHeatingRate() * 60;
+        double rate = Rounding.temperature(history.largestHeatingRate() * 60);
         boolean ok = rate <= limitCPerMin;
         String detail = String.format(Locale.ROOT, "the part's mean temperature rises at up to %.1f °C/min "
                         + "(stage '%s'), %s the %s °C/min limit%s", rate, fastest.conditions().name(),
                 ok ? "within" : "faster than", trim(limitCPerMin),
                 ok ? "" : ": risk of blistering or outgassing of the coating, or of thermal stress in the part; preheat more gently or lower the first zone's air");
-        return new CheckResult("heating-rate", ok ? CheckResult.PASS : CheckResult.FAIL, Rounding.temperature(rate),
+        return new CheckResult("heating-rate", ok ? CheckResult.PASS : CheckResult.FAIL, rate,
                 limitCPerMin, detail, null);
     }
 

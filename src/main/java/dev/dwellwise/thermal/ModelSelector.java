@@ -65,8 +65,9 @@ public final class ModelSelector {
                             Double.NaN);
                 }
                 ThermalHistory slabHistory = StageRunner.run(problem, slab);
-                return new Selection(slabHistory, slab, requested, decided(history) + " >= " + BIOT_LIMIT
-                        + ": through-thickness conduction", false, slabHistory.largestSpreadK());
+                // the number that decided comes from the lumped trial; the stages report the slab's own
+                return new Selection(slabHistory, slab, requested, "lumped trial: " + decided(history) + " >= "
+                        + BIOT_LIMIT + ": through-thickness conduction", false, slabHistory.largestSpreadK());
             }
         }
     }

@@ -60,8 +60,8 @@ public final class PropertyCurve {
      */
     public double slopeAt(double temperatureK) {
         int n = values.length;
-        if (n == 1 || temperatureK < kelvin[0] || temperatureK >= kelvin[n - 1]) {
-            return 0;
+        if (n == 1 || !(temperatureK >= kelvin[0]) || temperatureK >= kelvin[n - 1]) {
+            return 0; // NaN included: a failed step is caught by its error norm, not here
         }
         int i = Arrays.binarySearch(kelvin, temperatureK);
         int lo = i >= 0 ? i : -i - 2;

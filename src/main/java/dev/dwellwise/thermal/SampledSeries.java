@@ -20,6 +20,17 @@ public final class SampledSeries {
         this.capacity = capacity;
     }
 
+    /**
+     * A stage boundary: one sample however many stages meet at that instant (zero-length stages),
+     * carrying the index of the last stage that starts there.
+     */
+    void addBoundary(double t, Observation o, int stageIndex, double sameInstant) {
+        if (size > 0 && Math.abs(time[size - 1] - t) <= sameInstant) {
+            size--;
+        }
+        add(t, o, stageIndex);
+    }
+
     void add(double t, Observation o, int stageIndex) {
         if (size == capacity) {
             throw new ComputeLimitExceededException(ComputeLimitExceededException.Limit.SAMPLES,

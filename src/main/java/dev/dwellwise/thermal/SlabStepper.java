@@ -64,6 +64,9 @@ final class SlabStepper implements Stepper {
         return readout.observe(t, y, exposure);
     }
 
+    /** Whether the last attempt was at the smallest step the clock resolves. */
+    private boolean lastTriedMinimum;
+
     @Override
     public Segment advance(double limit) {
         if (derivative == null) {
@@ -76,11 +79,24 @@ final class SlabStepper implements Stepper {
             nextStep = initialStep(limit - t);
         }
         boolean rejected = false;
+        // a step must move the clock: below a few rounding units of t the interpolant would divide by zero
+        double minStep = 8 * Math.ulp(Math.max(1.0, Math.abs(t)));
         while (true) {
             double remaining = limit - t;
+            if (nextStep < minStep) {
+                if (rejected && lastTriedMinimum) { // the smallest step the clock resolves failed too
+                    throw new ComputeLimitExceededException(ComputeLimitExceededException.Limit.UNRESOLVED,
+                            "the slab solve could not take a time step at " + t + " s");
+                }
+                nextStep = minStep;
+            }
+            lastTriedMinimum = nextStep == minStep;
             double h = nextStep * STRETCH >= remaining ? remaining : nextStep;
             TrBdf2.Step step = method.attempt(t, h, y, derivative, exposure);
             checkBudget();
+            if (step != null && !Double.isFinite(step.errorNorm())) {
+                step = null; // a non-finite state is a failed step, like a Newton failure
+            }
             if (step == null) {
                 nextStep = h * NEWTON_FAILURE_SHRINK;
                 rejected = true;

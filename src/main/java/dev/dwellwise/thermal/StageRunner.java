@@ -52,7 +52,7 @@ public final class StageRunner {
             outcomes.add(runStage(i, problem.stages().get(i)));
         }
         double end = stepper.time();
-        series.add(end, stepper.observe(), problem.stages().size() - 1);
+        series.addBoundary(end, stepper.observe(), problem.stages().size() - 1, SAME_INSTANT);
         return new ThermalHistory(modelName, outcomes, series, dense, profiles, largestRate, peakK,
                 stepper.steps(), stepper.evaluations());
     }
@@ -62,7 +62,7 @@ public final class StageRunner {
         double start = stepper.time();
         double bound = start + stage.boundSeconds();
         Observation first = stepper.observe();
-        series.add(start, first, index);
+        series.addBoundary(start, first, index, SAME_INSTANT);
         StageFigures figures = new StageFigures(problem.part().emissivity(), stage, start, first);
         HoldClock hold = stage.end() instanceof EndCondition.HoldAbove h
                 ? new HoldClock(h.kelvin(), h.seconds(), first.coldestK()) : null;
@@ -89,6 +89,7 @@ public final class StageRunner {
                     ? stepper.advance(Math.min(bound, stepper.time() + hold.remaining()), hold.stopSignal())
                     : stepper.advance(bound, stopSignal(stage.end(), hold));
             checkBudget();
+            requireFinite(segment);
             double[] scan = scanPoints(segment);
             double eventTime = findEvent(stage.end(), hold, segment, scan);
             double keptEnd = Double.isNaN(eventTime) ? segment.end() : eventTime;
@@ -200,6 +201,15 @@ public final class StageRunner {
         deadline.check();
     }
 
+    /** A back end that lost its numbers must answer with a problem, never with NaN in a result. */
+    private static void requireFinite(Segment segment) {
+        Observation end = segment.at(segment.end());
+        if (!(Double.isFinite(end.meanK()) && Double.isFinite(end.coldestK()) && Double.isFinite(end.hottestK()))) {
+            throw new ComputeLimitExceededException(ComputeLimitExceededException.Limit.UNRESOLVED,
+                    "the solver lost precision at " + segment.end() + " s");
+        }
+    }
+
     /** The segment's knots with the midpoint of every piece between them. */
     static double[] scanPoints(Segment segment) {
         double[] knots = segment.knots();
@@ -276,7 +286,10 @@ public final class StageRunner {
 
     /** Per-stage extremes gathered over the segments, kelvin and K/s. */
     private static final class StageFigures {
-        /** A rise smaller than this (kelvin) between scan points is integration noise, not a peak worth refining. */
+        /**
+         * A rise smaller than this between scan points (kelvin, or kelvin per second for rates) is
+         * integration noise, not a peak worth refining.
+         */
         private static final double PEAK_NOISE = 1e-9;
 
         private final double emissivity;
@@ -313,10 +326,19 @@ public final class StageRunner {
                 hot[i] = o.hottestK();
                 largestHr = Math.max(largestHr, hr(times[i], o));
                 lowK = Math.min(lowK, o.coldestK());
-                largestRate = Math.max(largestRate, segment.meanRateAt(times[i]));
                 peakK = Math.max(peakK, hot[i]);
             }
+            double[] rate = new double[times.length];
+            for (int i = 0; i < times.length; i++) {
+                rate[i] = segment.meanRateAt(times[i]);
+                largestRate = Math.max(largestRate, rate[i]);
+            }
             for (int i = 1; i + 1 < times.length; i++) {
+                if (rate[i] > rate[i - 1] + PEAK_NOISE && rate[i] > rate[i + 1] + PEAK_NOISE) {
+                    // the heating rate peaks inside a step (a ramp, or a slab's mean): refine it too
+                    largestRate = Math.max(largestRate, EventLocator.maximum(segment::meanRateAt,
+                            times[i - 1], times[i + 1]));
+                }
                 if (hot[i] > hot[i - 1] + PEAK_NOISE && hot[i] > hot[i + 1] + PEAK_NOISE) {
                     // an interior maximum: refine it between the neighbouring scan points
                     peakK = Math.max(peakK, EventLocator.maximum(t -> segment.at(t).hottestK(),

@@ -72,6 +72,9 @@ class CureValidationHttpTest {
                 bad("cure.equivalentTime.referenceC", -300),
                 bad("cure.kinetics.preExponentialPerS", 0),
                 bad("cure.kinetics.preExponentialPerS", -2.7e8),
+                // beyond any published kinetics, and too stiff to integrate within the budget
+                bad("cure.kinetics.preExponentialPerS", 1e300),
+                bad("cure.kinetics.activationEnergyKJPerMol", 1e300),
                 bad("cure.kinetics.glassTransition.lambda", 0),
                 bad("cure.kinetics.glassTransition.lambda", 1.5),
                 bad("cure.kinetics.glassTransition.minC", 120),

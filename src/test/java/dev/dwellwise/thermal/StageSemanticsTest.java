@@ -110,6 +110,18 @@ class StageSemanticsTest {
     }
 
     @Test
+    void zeroLengthStagesShareOneBoundarySampleCarryingTheLastStageThatStartsThere() {
+        ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0, 150);
+        ThermalHistory h = run(part, 10,
+                Parts.stage("met", 200, 200, 30, new EndCondition.ColdestReaches(K + 100), 600),
+                Parts.stage("met too", 200, 200, 30, new EndCondition.ColdestReaches(K + 120), 600),
+                Parts.stage("bake", 200, 200, 30, new EndCondition.AfterDuration(20), 20),
+                Parts.stage("met at the end", 20, 20, 30, new EndCondition.HottestFallsTo(K + 400), 600));
+        assertArrayEquals(new double[] {0, 10, 20}, h.series().timeSeconds(), 1e-12);
+        assertArrayEquals(new int[] {2, 2, 3}, h.series().stageIndex());
+    }
+
+    @Test
     void aHoldCountsFromTheStageStartWhenThePartIsAlreadyAbove() {
         ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0, 190);
         ThermalHistory h = run(part, 10,
