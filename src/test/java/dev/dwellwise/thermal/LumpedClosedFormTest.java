@@ -39,6 +39,34 @@ class LumpedClosedFormTest {
     }
 
     @Test
+    void aLongStageStaysOnTheExponentialAfterThePartHasSettled() {
+        // same closed form (Incropera Eqs. 5.6-5.7 [M]) over 20,000 s: the part settles near 2,400 s
+        // and the stepper then holds the steady temperature, within 1e-7 K of the exponential
+        ThermalPart part = Parts.plate(Parts.steel1010(), 0.002, 2, 0.0, 20);
+        ThermalProblem problem = Parts.problem(part, 500,
+                Parts.stage("long soak", 200, 200, 30, new EndCondition.AfterDuration(20_000), 20_000));
+        ThermalHistory history = StageRunner.run(problem, new LumpedModel());
+        double tau = 7832 * 434 * 0.001 / 30;
+        double[] time = history.series().timeSeconds();
+        double[] temp = history.series().meanK();
+        for (int i = 0; i < time.length; i++) {
+            assertEquals(Physics.toKelvin(200) - 180 * Math.exp(-time[i] / tau), temp[i], 1e-6, "t = " + time[i]);
+        }
+    }
+
+    @Test
+    void aFoilUnderExtremeConvectionSettlesInsteadOfExhaustingTheStepBudget() {
+        // 1 um steel at h = 10,000: tau = rho c L / (2 h) = 0.17 ms, a stiff problem for an explicit
+        // method; once settled the part sits at the air temperature (the closed form's limit)
+        ThermalPart part = Parts.plate(Parts.steel1010(), 0.000001, 2, 0.9, 20);
+        ThermalProblem problem = Parts.problem(part, 600,
+                Parts.stage("oven", 200, 200, 10_000, new EndCondition.AfterDuration(3600), 3600));
+        ThermalHistory history = StageRunner.run(problem, new LumpedModel());
+        assertEquals(Physics.toKelvin(200), history.finalState().meanK(), 1e-6);
+        assertEquals(3600, history.totalSeconds(), 1e-9);
+    }
+
+    @Test
     void radiationOnlyHeatingReachesTheTargetAtTheClosedFormTime() {
         // Radiation-only lumped body, fixed surroundings: Bejan & Kraus (eds.), Heat Transfer Handbook (2003),
         // Eq. 3.283 with eps sigma for sigma [F]; same as Incropera Eq. 5.18 [M]. REFERENCES.md section 2 [C]:
