@@ -1,5 +1,8 @@
 package dev.dwellwise;
 
+import dev.dwellwise.http.Http;
+import dev.dwellwise.http.Workloads;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -41,13 +44,6 @@ class ServeProcessIT {
 
     private static final int JOBS = 3;
     private static final Pattern SERVING = Pattern.compile("serving on port (\\d+)");
-    private static final String STIFF_JOB = """
-            { "part": { "material": { "densityKgPerM3": 1000, "specificHeatJPerKgK": 500, "conductivityWPerMK": 50 },
-                        "thicknessMm": 0.01, "emissivity": 0.5, "initialTemperatureC": 20 },
-              "stages": [ { "name": "soak", "airTemperatureC": 200, "convectionWPerM2K": 5000,
-                            "until": { "seconds": 300 } } ],
-              "model": "lumped", "output": { "sampleSeconds": 10, "series": false } }
-            """;
 
     private final HttpClient client = HttpClient.newBuilder().version(HttpClient.Version.HTTP_1_1)
             .connectTimeout(Duration.ofSeconds(5)).build();
@@ -103,13 +99,13 @@ class ServeProcessIT {
         for (int i = 0; i < JOBS; i++) {
             inFlight.add(client.sendAsync(HttpRequest.newBuilder(uri("/v1/simulations"))
                     .timeout(Duration.ofSeconds(25)).header("Content-Type", "application/json")
-                    .POST(HttpRequest.BodyPublishers.ofString(STIFF_JOB)).build(), HttpResponse.BodyHandlers.ofString()));
+                    .POST(HttpRequest.BodyPublishers.ofString(Workloads.STIFF_FOIL)).build(), HttpResponse.BodyHandlers.ofString()));
         }
         awaitMetric("dwellwise_solves_waiting " + (JOBS - 1) + ".0");
 
         // SIGTERM, as kill -TERM; through the handle, since Process.destroy() also closes the output pipe.
         assertTrue(process.toHandle().destroy());
-        awaitConnectionsRefused();
+        Http.awaitConnectionsRefused(port);
         assertFalse(inFlight.stream().allMatch(CompletableFuture::isDone), "solves still run after the socket closed");
 
         for (CompletableFuture<HttpResponse<String>> request : inFlight) {
@@ -132,20 +128,6 @@ class ServeProcessIT {
         }
     }
 
-    private void awaitConnectionsRefused() throws InterruptedException {
-        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(5);
-        while (true) {
-            try (Socket socket = new Socket()) {
-                socket.connect(new InetSocketAddress("127.0.0.1", port), 500);
-            } catch (ConnectException refused) {
-                return;
-            } catch (IOException other) {
-                // not refused yet
-            }
-            assertTrue(System.nanoTime() < deadline, "port " + port + " still accepts connections");
-            Thread.sleep(10);
-        }
-    }
 
     private HttpResponse<String> get(String path) throws Exception {
         return client.send(HttpRequest.newBuilder(uri(path)).timeout(Duration.ofSeconds(5)).build(),

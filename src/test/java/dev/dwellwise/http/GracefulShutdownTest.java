@@ -41,7 +41,7 @@ class GracefulShutdownTest {
             assertTrue(gate.awaitEntered(), "every request reached the solver");
 
             CompletableFuture<Void> stopping = CompletableFuture.runAsync(service::stop);
-            awaitConnectionsRefused(service.port());
+            Http.awaitConnectionsRefused(service.port());
             assertFalse(stopping.isDone(), "the stop waits for the requests in flight");
 
             gate.open();
@@ -70,7 +70,7 @@ class GracefulShutdownTest {
             assertTrue(gate.awaitEntered());
 
             CompletableFuture<Void> stopping = CompletableFuture.runAsync(service::stop);
-            awaitConnectionsRefused(service.port());
+            Http.awaitConnectionsRefused(service.port());
             // Jetty either closes the idle connection or answers 503; it never serves the request.
             String answer = exchange(keptAlive);
             assertTrue(answer.isEmpty() || answer.startsWith("HTTP/1.1 503 ") && answer.contains("Retry-After: "),
@@ -103,19 +103,4 @@ class GracefulShutdownTest {
         return head + new String(body, StandardCharsets.UTF_8);
     }
 
-    /** Polls until a connection attempt is refused (bounded): the listening socket is closed. */
-    static void awaitConnectionsRefused(int port) throws InterruptedException {
-        long deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(Http.TIMEOUT_MILLIS);
-        while (true) {
-            try (Socket socket = new Socket()) {
-                socket.connect(new InetSocketAddress("127.0.0.1", port), 500);
-            } catch (ConnectException refused) {
-                return;
-            } catch (IOException other) {
-                // a timeout or reset: not refused yet
-            }
-            assertTrue(System.nanoTime() < deadline, "port " + port + " still accepts connections");
-            Thread.sleep(10);
-        }
-    }
 }

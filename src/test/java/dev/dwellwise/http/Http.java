@@ -1,5 +1,7 @@
 package dev.dwellwise.http;
 
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
 import io.restassured.RestAssured;
 import io.restassured.config.HttpClientConfig;
 import io.restassured.config.RestAssuredConfig;
@@ -9,10 +11,13 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.OutputStream;
 import java.net.Socket;
+import java.util.concurrent.TimeUnit;
+import java.net.InetSocketAddress;
+import java.net.ConnectException;
 import java.nio.charset.StandardCharsets;
 
 /** REST Assured and raw-socket requests to a running service, every one bounded in time. */
-final class Http {
+public final class Http {
 
     static final int TIMEOUT_MILLIS = 5_000;
 
@@ -39,6 +44,22 @@ final class Http {
             ByteArrayOutputStream answer = new ByteArrayOutputStream();
             in.transferTo(answer);
             return answer.toString(StandardCharsets.ISO_8859_1);
+        }
+    }
+
+    /** Polls until a connection attempt is refused (bounded): the listening socket is closed. */
+    public static void awaitConnectionsRefused(int port) throws InterruptedException {
+        long deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(Http.TIMEOUT_MILLIS);
+        while (true) {
+            try (Socket socket = new Socket()) {
+                socket.connect(new InetSocketAddress("127.0.0.1", port), 500);
+            } catch (ConnectException refused) {
+                return;
+            } catch (IOException other) {
+                // a timeout or reset: not refused yet
+            }
+            assertTrue(System.nanoTime() < deadline, "port " + port + " still accepts connections");
+            Thread.sleep(10);
         }
     }
 }

@@ -1,7 +1,7 @@
 package dev.dwellwise.http;
 
 /** Job bodies for the production tests: an ordinary job and a stiff one that computes for long. */
-final class Workloads {
+public final class Workloads {
 
     /** A small lumped job that passes: a thin steel panel through a bake and a cool-down. */
     static final String PANEL = """
@@ -25,7 +25,7 @@ final class Workloads {
      * of thousands of steps for five minutes of ramp, around a second of computing, yet inside the
      * step and evaluation limits.
      */
-    static final String STIFF_FOIL = """
+    public static final String STIFF_FOIL = """
             {
               "part": { "material": { "densityKgPerM3": 1000, "specificHeatJPerKgK": 500, "conductivityWPerMK": 50 },
                         "thicknessMm": 0.01, "exposedFaces": 2, "emissivity": 0.5, "initialTemperatureC": 20 },
