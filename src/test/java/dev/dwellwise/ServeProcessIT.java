@@ -35,8 +35,8 @@ import org.junit.jupiter.api.Timeout;
 
 /**
  * The packaged jar as the orchestrator runs it: started as a process, stopped with SIGTERM
- * while requests are in flight. With one worker, three stiff jobs
- * (each some tenths of a second of computing) run one after another, so when the signal comes the
+ * while requests are in flight. With one worker, three long jobs
+ * (each a second or more of computing) run one after another, so when the signal comes the
  * last one has at least two solves to wait for: in flight on any machine, without a sleep.
  */
 @Timeout(40)
@@ -99,7 +99,7 @@ class ServeProcessIT {
         for (int i = 0; i < JOBS; i++) {
             inFlight.add(client.sendAsync(HttpRequest.newBuilder(uri("/v1/simulations"))
                     .timeout(Duration.ofSeconds(25)).header("Content-Type", "application/json")
-                    .POST(HttpRequest.BodyPublishers.ofString(Workloads.STIFF_FOIL)).build(), HttpResponse.BodyHandlers.ofString()));
+                    .POST(HttpRequest.BodyPublishers.ofString(Workloads.LONG_SOLVE)).build(), HttpResponse.BodyHandlers.ofString()));
         }
         awaitMetric("dwellwise_solves_waiting " + (JOBS - 1) + ".0");
 

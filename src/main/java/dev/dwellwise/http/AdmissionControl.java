@@ -10,7 +10,7 @@ import java.util.function.Supplier;
 
 /**
  * Bounds the solves in progress: at most {@code workers} compute at once and at most {@code queue}
- * more wait for a worker, in arrival order. A solve beyond that is refused at once with 503 rather
+ * more wait for a worker. A solve beyond that is refused at once with 503 rather
  * than piling up behind the others; so is one that waited a whole compute budget without getting
  * a worker. Solves run on the request's own thread: the HTTP thread pool is sized to hold every
  * admitted solve plus headroom, so probes and scrapes are answered while the solvers are full.
@@ -22,7 +22,12 @@ final class AdmissionControl {
     private final long maxWaitMillis;
     /** Workers plus queue places: one is held from arrival to the end of the solve. */
     private final Semaphore admitted;
-    /** Workers: one is held while computing. Fair, so waiting solves start in arrival order. */
+    /**
+     * Workers: one is held while computing. Not fair: a fair semaphore hands each freed permit to a
+     * parked thread and the core idles until that thread is scheduled, which on two cores cut the
+     * throughput of short solves to about half (measured with 64 waiting threads). A waiter is still
+     * bounded by {@code maxWaitMillis}.
+     */
     private final Semaphore computing;
     private final Counter rejected;
     private final Timer waited;
@@ -32,7 +37,7 @@ final class AdmissionControl {
         this.queue = queue;
         this.maxWaitMillis = maxWaitMillis;
         this.admitted = new Semaphore(workers + queue);
-        this.computing = new Semaphore(workers, true);
+        this.computing = new Semaphore(workers, false);
         this.rejected = Counter.builder("dwellwise.admission.rejected")
                 .description("Solves refused with 503 because every worker and queue place was taken")
                 .register(registry);

@@ -1,5 +1,6 @@
 package dev.dwellwise.job;
 
+import dev.dwellwise.thermal.DecimalText;
 import java.util.List;
 
 /**
@@ -55,7 +56,7 @@ abstract class FieldChecks {
             return false;
         }
         if (!(value >= low && value <= high)) {
-            add(field, "must be from " + trim(low) + " to " + trim(high));
+            add(field, "must be from " + DecimalText.trimmed(low) + " to " + DecimalText.trimmed(high));
             return false;
         }
         return true;
@@ -73,9 +74,6 @@ abstract class FieldChecks {
         }
     }
 
-    static String trim(double v) {
-        return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(v);
-    }
 
     void add(String field, String message) {
         errors.add(new FieldError(field, message));

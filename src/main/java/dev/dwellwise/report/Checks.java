@@ -1,6 +1,7 @@
 package dev.dwellwise.report;
 
 import dev.dwellwise.job.Limits;
+import dev.dwellwise.thermal.DecimalText;
 import dev.dwellwise.thermal.EndCondition;
 import dev.dwellwise.thermal.ModelSelector;
 import dev.dwellwise.thermal.Physics;
@@ -10,7 +11,6 @@ import dev.dwellwise.thermal.ThermalHistory;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
-import java.util.Locale;
 
 /**
  * The checks of a thermal history: whether the model is valid for the part, whether each stage met
@@ -142,10 +142,11 @@ public final class Checks {
         StageOutcome fastest = history.stageWith(Comparator.comparingDouble(StageOutcome::largestHeatingRate));
         double rate = Rounding.temperature(history.largestHeatingRate() * 60);
         boolean ok = rate <= limitCPerMin;
-        String detail = String.format(Locale.ROOT, "the part's mean temperature rises at up to %.1f °C/min "
-                        + "(stage '%s'), %s the %s °C/min limit%s", rate, fastest.conditions().name(),
-                ok ? "within" : "faster than", trim(limitCPerMin),
-                ok ? "" : ": risk of blistering or outgassing of the coating, or of thermal stress in the part; preheat more gently or lower the first zone's air");
+        String detail = "the part's mean temperature rises at up to " + DecimalText.fixed(rate, 1) + " °C/min (stage '"
+                + fastest.conditions().name() + "'), " + (ok ? "within" : "faster than") + " the "
+                + DecimalText.trimmed(limitCPerMin) + " °C/min limit"
+                + (ok ? "" : ": risk of blistering or outgassing of the coating, or of thermal stress in the part; "
+                        + "preheat more gently or lower the first zone's air");
         return new CheckResult("heating-rate", ok ? CheckResult.PASS : CheckResult.FAIL, rate,
                 limitCPerMin, detail, null);
     }
@@ -156,18 +157,15 @@ public final class Checks {
     }
 
     static String c1(double celsius) {
-        return String.format(Locale.ROOT, "%.1f °C", celsius);
+        return DecimalText.fixed(celsius, 1) + " °C";
     }
 
     private static String k1(double kelvin) {
-        return String.format(Locale.ROOT, "%.1f K", kelvin);
+        return DecimalText.fixed(kelvin, 1) + " K";
     }
 
     static String s(double seconds) {
-        return String.format(Locale.ROOT, "%.1f s", seconds);
+        return DecimalText.fixed(seconds, 1) + " s";
     }
 
-    static String trim(double v) {
-        return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(v);
-    }
 }

@@ -5,10 +5,10 @@ import dev.dwellwise.cure.EquivalentTimeSpec;
 import dev.dwellwise.cure.GlassTransitionSpec;
 import dev.dwellwise.cure.KineticsSpec;
 import dev.dwellwise.cure.TimeAboveSpec;
+import dev.dwellwise.thermal.DecimalText;
 import dev.dwellwise.thermal.Physics;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.function.Supplier;
 
 /**
@@ -53,7 +53,7 @@ final class CureChecks {
 
     private static CheckResult equivalentTime(EquivalentTimeSpec s, CureReport figures, HoldAdvice hold) {
         String worth = " at " + Checks.c(s.referenceK()) + " (E = "
-                + Checks.trim(Rounding.significant(s.activationEnergyJPerMol() / 1000)) + " kJ/mol)";
+                + DecimalText.trimmed(Rounding.significant(s.activationEnergyJPerMol() / 1000)) + " kJ/mol)";
         return window(EQUIVALENT_TIME, new Side(figures.coldest().equivalentSeconds(), s.minSeconds(),
                         "the coldest point's history is worth "),
                 s.maxSeconds().isEmpty() ? null : new Side(figures.hottest().equivalentSeconds(),
@@ -65,10 +65,10 @@ final class CureChecks {
         double degree = figures.coldest().degree();
         boolean met = degree >= s.minDegree();
         String detail = met
-                ? String.format(Locale.ROOT, "coldest point reached a degree of cure of %.4f, at least the required %s",
-                        degree, Checks.trim(s.minDegree()))
-                : String.format(Locale.ROOT, "coldest point reached only %.4f of the required %s degree of cure: "
-                        + "under-cured; %s", degree, Checks.trim(s.minDegree()), hold.forDegree());
+                ? "coldest point reached a degree of cure of " + DecimalText.fixed(degree, 4) + ", at least the required "
+                        + DecimalText.trimmed(s.minDegree())
+                : "coldest point reached only " + DecimalText.fixed(degree, 4) + " of the required "
+                        + DecimalText.trimmed(s.minDegree()) + " degree of cure: under-cured; " + hold.forDegree();
         return new CheckResult(DEGREE, met ? CheckResult.PASS : CheckResult.FAIL, degree, s.minDegree(), detail, null);
     }
 
@@ -76,8 +76,8 @@ final class CureChecks {
         double tgC = figures.coldest().glassTransitionC();
         double minC = Rounding.temperature(Physics.toCelsius(g.minK().getAsDouble()));
         boolean met = tgC >= minC;
-        String reached = String.format(Locale.ROOT, "coldest point's glass transition reached %s (degree of cure "
-                + "%.4f)", Checks.c1(tgC), figures.coldest().degree());
+        String reached = "coldest point's glass transition reached " + Checks.c1(tgC) + " (degree of cure "
+                + DecimalText.fixed(figures.coldest().degree(), 4) + ")";
         String detail = met
                 ? reached + ", at least the required " + Checks.c1(minC)
                 : reached + ", below the required " + Checks.c1(minC) + ": under-cured; " + hold.forGlassTransition();

@@ -8,6 +8,7 @@ import dev.dwellwise.cure.DegreeOfCure;
 import dev.dwellwise.cure.HoldEstimate;
 import dev.dwellwise.cure.KineticsSpec;
 import dev.dwellwise.cure.TemperaturePath;
+import dev.dwellwise.thermal.DecimalText;
 import dev.dwellwise.thermal.DenseHistory;
 import dev.dwellwise.thermal.EndCondition;
 import dev.dwellwise.thermal.StageOutcome;
@@ -15,7 +16,6 @@ import dev.dwellwise.thermal.ThermalHistory;
 import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
-import java.util.Locale;
 import java.util.OptionalDouble;
 
 /**
@@ -119,8 +119,8 @@ final class HoldAdvice {
     private String more(double seconds) {
         // rounded up, and at least a second: a shortfall the rounding of the figure hides still needs a little
         long whole = Math.max(1, (long) Math.ceil(seconds));
-        return String.format(Locale.ROOT, "about %d s%s more hold in '%s' (coldest point at or above %s) would pass", whole,
-                readable(whole), stageName(), Checks.c(holdK));
+        return "about " + whole + " s" + readable(whole) + " more hold in '" + stageName()
+                + "' (coldest point at or above " + Checks.c(holdK) + ") would pass";
     }
 
     /** Minutes or hours beside long holds, as an operator sets a dwell. */
@@ -128,8 +128,8 @@ final class HoldAdvice {
         if (seconds < 120) {
             return "";
         }
-        return seconds < 7200 ? String.format(Locale.ROOT, " (%.1f min)", seconds / 60.0)
-                : String.format(Locale.ROOT, " (%.1f h)", seconds / 3600.0);
+        return seconds < 7200 ? " (" + DecimalText.fixed(seconds / 60.0, 1) + " min)"
+                : " (" + DecimalText.fixed(seconds / 3600.0, 1) + " h)";
     }
 
     private String tooEarly() {

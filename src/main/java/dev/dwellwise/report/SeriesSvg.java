@@ -1,8 +1,8 @@
 package dev.dwellwise.report;
 
 import dev.dwellwise.job.Limits;
+import dev.dwellwise.thermal.DecimalText;
 import java.util.List;
-import java.util.Locale;
 
 /**
  * The history as an SVG chart for the dashboard: temperature against time, the stages as bands,
@@ -137,11 +137,11 @@ public final class SeriesSvg {
     }
 
     private static String f(double v) {
-        return String.format(Locale.ROOT, "%.1f", v);
+        return DecimalText.fixed(v, 1);
     }
 
     private static String trim(double v) {
-        return v == Math.rint(v) ? Long.toString((long) v) : String.format(Locale.ROOT, "%.1f", v);
+        return v == Math.rint(v) ? Long.toString((long) v) : DecimalText.fixed(v, 1);
     }
 
     private static String escape(String text) {

@@ -37,12 +37,13 @@ final class EventLocator {
     /**
      * The first time at which g rises from negative to zero or above, between consecutive scan
      * points; NaN when it stays negative. The first scan point is the segment start, where g is
-     * known to be negative (the caller checked the condition there).
+     * known to be negative (the caller checked the condition there). {@code atScan} gives g at the
+     * i-th scan point, already read; g itself is evaluated only to refine a crossing.
      */
-    static double firstRise(DoubleUnaryOperator g, double[] scan) {
-        double previous = g.applyAsDouble(scan[0]);
+    static double firstRise(DoubleUnaryOperator g, double[] scan, java.util.function.IntToDoubleFunction atScan) {
+        double previous = atScan.applyAsDouble(0);
         for (int i = 1; i < scan.length; i++) {
-            double current = g.applyAsDouble(scan[i]);
+            double current = atScan.applyAsDouble(i);
             if (previous < 0 && current >= 0) {
                 return root(g, scan[i - 1], scan[i]);
             }

@@ -10,10 +10,10 @@ package dev.dwellwise.thermal;
 public final class LumpedModel implements ThermalModel {
 
     /** Relative tolerance of the error control: leaves about 1e-6 K on a 500 K history. */
-    public static final double RELATIVE_TOLERANCE = 1e-10;
+    public static final double RELATIVE_TOLERANCE = 1e-9;
 
     /** Absolute tolerance, kelvin. */
-    public static final double ABSOLUTE_TOLERANCE = 1e-8;
+    public static final double ABSOLUTE_TOLERANCE = 1e-7;
 
     @Override
     public String name() {

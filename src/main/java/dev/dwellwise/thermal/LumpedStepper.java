@@ -1,58 +1,35 @@
 package dev.dwellwise.thermal;
 
-import java.util.ArrayList;
-import java.util.List;
-import org.apache.commons.math3.exception.MaxCountExceededException;
-import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
-import org.apache.commons.math3.ode.events.EventHandler;
-import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
-import org.apache.commons.math3.ode.sampling.StepHandler;
-import org.apache.commons.math3.ode.sampling.StepInterpolator;
-
 /**
- * Steps the lumped balance of {@link LumpedModel} with Commons Math. The integrator drives its own
- * loop, so each {@link #advance} is one integration call, to the limit or to the runner's stop
- * signal (a Commons Math event handler), keeping copies of the step interpolators as the dense
- * output. State: y[0] = T, kelvin.
+ * Steps the lumped balance of {@link LumpedModel} with {@link ScalarDormandPrince}: each
+ * {@link #advance} is one integration call, to the limit, to the step after the runner's stop
+ * signal rises through zero, or to the step at which the part settles; the accepted steps'
+ * continuous extension is the dense output.
  */
 final class LumpedStepper implements Stepper {
 
     private final ThermalPart part;
     private final ComputeBudget budget;
     private final Deadline deadline;
-    private final DormandPrince853Integrator integrator;
+    private final ScalarDormandPrince integrator;
     private final double faces;
-    /** The layers as arrays: C(T) is evaluated at every right-hand-side call. */
-    private final Material[] materials;
-    private final double[] thicknesses;
+    /** C(T) = sum over the layers of rho c(T) L, J/(m²·K), as one curve: it is read at every right-hand-side call. */
+    private final PropertyCurve capacity;
     private StageConditions stage;
     private double stageStart;
     private double t;
     private double temperatureK;
     private long steps;
-    private long evaluations;
     private Segment last;
-    private final FirstOrderDifferentialEquations equations = new FirstOrderDifferentialEquations() {
-        @Override
-        public int getDimension() {
-            return 1;
-        }
-
-        @Override
-        public void computeDerivatives(double time, double[] state, double[] derivative) {
-            derivative[0] = rate(time, state[0]);
-        }
-    };
-
     LumpedStepper(ThermalPart part, ComputeBudget budget) {
         this.part = part;
         this.budget = budget;
         this.deadline = Deadline.startingNow(budget);
         this.faces = part.exposedFaces();
-        this.materials = part.layers().stream().map(Layer::material).toArray(Material[]::new);
-        this.thicknesses = part.layers().stream().mapToDouble(Layer::thicknessM).toArray();
-        this.integrator = new DormandPrince853Integrator(1e-9, 1e7,
-                LumpedModel.ABSOLUTE_TOLERANCE, LumpedModel.RELATIVE_TOLERANCE);
+        this.capacity = PropertyCurve.weightedSum(
+                part.layers().stream().map(l -> l.material().specificHeat()).toArray(PropertyCurve[]::new),
+                part.layers().stream().mapToDouble(l -> l.material().densityKgPerM3() * l.thicknessM()).toArray());
+        this.integrator = new ScalarDormandPrince(LumpedModel.ABSOLUTE_TOLERANCE, LumpedModel.RELATIVE_TOLERANCE);
         this.temperatureK = part.initialK();
     }
 
@@ -61,11 +38,7 @@ final class LumpedStepper implements Stepper {
         double elapsed = time - stageStart;
         double q = Physics.surfaceFlux(stage.convection(), stage.airK(elapsed), part.emissivity(),
                 stage.surroundingsK(elapsed), k);
-        double capacity = 0;
-        for (int i = 0; i < materials.length; i++) {
-            capacity += materials[i].volumetricHeatCapacity(k) * thicknesses[i];
-        }
-        return faces * q / capacity;
+        return faces * q / capacity.at(k);
     }
 
     @Override
@@ -90,8 +63,8 @@ final class LumpedStepper implements Stepper {
     }
 
     /**
-     * Integrates to {@code limit} in one call, or until {@code stop} rises through zero: a Commons
-     * Math event handler ends the integration just after that root, so a stage costs one call.
+     * Integrates to {@code limit} in one call, or until {@code stop} rises through zero at a step
+     * end (the runner then places the event on the dense output), or until the part settles.
      */
     @Override
     public Segment advance(double limit, StopSignal stop) {
@@ -105,48 +78,35 @@ final class LumpedStepper implements Stepper {
             steps++;
             return last;
         }
-        List<StepInterpolator> pieces = new ArrayList<>();
-        integrator.clearStepHandlers();
-        integrator.clearEventHandlers();
-        integrator.addStepHandler(new StepHandler() {
-            @Override
-            public void init(double t0, double[] y0, double tEnd) {
-            }
-
-            @Override
-            public void handleStep(StepInterpolator interpolator, boolean isLast) {
-                deadline.check(); // one call can hold thousands of steps: stop inside it
-                if (steps + pieces.size() >= budget.maxSteps()) {
-                    throw new ComputeLimitExceededException(ComputeLimitExceededException.Limit.STEPS,
-                            "the solve needed more than " + budget.maxSteps() + " steps");
-                }
-                pieces.add(interpolator.copy());
-            }
-        });
-        if (stop != StopSignal.NONE) {
-            integrator.addEventHandler(new StopAt(stop), Double.POSITIVE_INFINITY, EVENT_CONVERGENCE, 100);
-        }
-        if (!Double.isNaN(steadyK)) {
-            double target = steadyK;
-            integrator.addEventHandler(new StopAt(o -> SETTLED_K - Math.abs(o.meanK() - target)),
-                    Double.POSITIVE_INFINITY, EVENT_CONVERGENCE, 100);
-        }
-        integrator.setMaxEvaluations((int) Math.max(1, Math.min(Integer.MAX_VALUE,
-                budget.maxEvaluations() - evaluations)));
-        double[] y = {temperatureK};
-        double reached;
-        try {
-            reached = integrator.integrate(equations, t, y, limit, y);
-        } catch (MaxCountExceededException e) {
-            throw new ComputeLimitExceededException(ComputeLimitExceededException.Limit.EVALUATIONS,
-                    "the solve needed more than " + budget.maxEvaluations() + " evaluations");
-        }
-        evaluations += integrator.getEvaluations();
+        double[] signal = {stop.value(Observation.uniform(temperatureK))};
+        ScalarDormandPrince.EndCheck ends = (time, k) -> {
+            double now = stop == StopSignal.NONE ? -1 : stop.value(Observation.uniform(k));
+            boolean rose = signal[0] < 0 && now >= 0;
+            signal[0] = now;
+            return rose || Math.abs(k - steadyK) <= SETTLED_K;
+        };
+        ScalarDormandPrince.Pieces pieces = new ScalarDormandPrince.Pieces();
+        double reached = integrator.integrate(this::rate, t, temperatureK, limit, ends, pieces, this::guard);
         steps += pieces.size();
         last = new LumpedSegment(pieces, this::rate);
         t = reached;
-        temperatureK = y[0];
+        temperatureK = pieces.lastValue();
         return last;
+    }
+
+    /** Before every step: the step, evaluation and wall-clock budgets (one call can hold thousands of steps). */
+    private void guard(long takenInThisCall) {
+        if (steps + takenInThisCall >= budget.maxSteps()) {
+            throw new ComputeLimitExceededException(ComputeLimitExceededException.Limit.STEPS,
+                    "the solve needed more than " + budget.maxSteps() + " steps");
+        }
+        if (integrator.evaluations() > budget.maxEvaluations()) {
+            throw new ComputeLimitExceededException(ComputeLimitExceededException.Limit.EVALUATIONS,
+                    "the solve needed more than " + budget.maxEvaluations() + " evaluations");
+        }
+        if ((takenInThisCall & 15) == 0) {
+            deadline.check();
+        }
     }
 
     @Override
@@ -162,7 +122,7 @@ final class LumpedStepper implements Stepper {
 
     @Override
     public long evaluations() {
-        return evaluations;
+        return integrator.evaluations();
     }
 
     @Override
@@ -178,36 +138,6 @@ final class LumpedStepper implements Stepper {
 
     private boolean constantStage() {
         return stage.airStartK() == stage.airEndK() && stage.surroundingsStartK() == stage.surroundingsEndK();
-    }
-
-    /** Event time accuracy of the early stop, seconds; the runner places the event itself far finer. */
-    private static final double EVENT_CONVERGENCE = 1e-6;
-
-    /** Ends the integration where the runner's stop signal rises through zero. */
-    private static final class StopAt implements EventHandler {
-        private final StopSignal stop;
-
-        StopAt(StopSignal stop) {
-            this.stop = stop;
-        }
-
-        @Override
-        public void init(double t0, double[] y0, double t) {
-        }
-
-        @Override
-        public double g(double time, double[] y) {
-            return stop.value(Observation.uniform(y[0]));
-        }
-
-        @Override
-        public Action eventOccurred(double time, double[] y, boolean increasing) {
-            return increasing ? Action.STOP : Action.CONTINUE;
-        }
-
-        @Override
-        public void resetState(double time, double[] y) {
-        }
     }
 
     /** A settled part: its steady temperature from {@code start} to {@code end}. */
@@ -233,71 +163,49 @@ final class LumpedStepper implements Stepper {
         }
     }
 
-    /** Dense output of one call: the Commons Math step interpolators, one per accepted step. */
+    /** Dense output of one call: the accepted steps' continuous extension. */
     private static final class LumpedSegment implements Segment {
-        private final List<StepInterpolator> pieces;
-        private final double[] knots;
+        private final ScalarDormandPrince.Pieces pieces;
         private final Rate rate;
 
-        LumpedSegment(List<StepInterpolator> pieces, Rate rate) {
+        LumpedSegment(ScalarDormandPrince.Pieces pieces, Rate rate) {
             this.pieces = pieces;
             this.rate = rate;
-            this.knots = new double[pieces.size() + 1];
-            knots[0] = pieces.get(0).getPreviousTime();
-            for (int i = 0; i < pieces.size(); i++) {
-                knots[i + 1] = pieces.get(i).getCurrentTime();
-            }
         }
 
         @Override
         public double start() {
-            return knots[0];
+            return pieces.start();
         }
 
         @Override
         public double end() {
-            return knots[knots.length - 1];
+            return pieces.end();
         }
 
         @Override
         public double[] knots() {
-            return knots.clone();
-        }
-
-        private double temperatureAt(double time) {
-            StepInterpolator piece = pieces.get(pieceAt(time));
-            piece.setInterpolatedTime(time);
-            return piece.getInterpolatedState()[0];
-        }
-
-        /** The piece that holds {@code time}: a scan for the usual few pieces, a binary search for many. */
-        private int pieceAt(double time) {
-            int n = pieces.size();
-            if (n <= 8) {
-                int i = 0;
-                while (i < n - 1 && time > knots[i + 1]) {
-                    i++;
-                }
-                return i;
-            }
-            int i = java.util.Arrays.binarySearch(knots, 1, knots.length, time);
-            i = i >= 0 ? i - 1 : Math.min(-i - 2, n - 1);
-            return Math.max(0, i);
+            return pieces.knots();
         }
 
         @Override
         public Observation at(double time) {
-            return Observation.uniform(temperatureAt(time));
+            return Observation.uniform(pieces.valueAt(time));
         }
 
         @Override
         public double meanRateAt(double time) {
-            return rate.at(time, temperatureAt(time));
+            return rate.at(time, pieces.valueAt(time));
+        }
+
+        @Override
+        public double meanRateAt(double time, Observation at) {
+            return rate.at(time, at.meanK());
         }
 
         @Override
         public double[] profileAt(double time) {
-            double k = temperatureAt(time);
+            double k = pieces.valueAt(time);
             return new double[] {k, k};
         }
     }

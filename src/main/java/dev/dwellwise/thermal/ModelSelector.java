@@ -1,7 +1,6 @@
 package dev.dwellwise.thermal;
 
 import java.util.Comparator;
-import java.util.Locale;
 
 /**
  * Chooses the back end for a problem. {@code auto} first solves the lumped model (cheap) and keeps
@@ -80,6 +79,6 @@ public final class ModelSelector {
 
     /** Four significant digits, locale-independent. */
     public static String format(double value) {
-        return String.format(Locale.ROOT, "%.4g", value);
+        return DecimalText.significant(value, 4);
     }
 }

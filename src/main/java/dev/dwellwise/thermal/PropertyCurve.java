@@ -10,10 +10,16 @@ public final class PropertyCurve {
 
     private final double[] kelvin;
     private final double[] values;
+    /** Slope of each piece, per kelvin: {@link #at} is on the right-hand side of every solve. */
+    private final double[] slopes;
 
     private PropertyCurve(double[] kelvin, double[] values) {
         this.kelvin = kelvin;
         this.values = values;
+        this.slopes = new double[Math.max(0, kelvin.length - 1)];
+        for (int i = 0; i < slopes.length; i++) {
+            slopes[i] = (values[i + 1] - values[i]) / (kelvin[i + 1] - kelvin[i]);
+        }
     }
 
     public static PropertyCurve constant(double value) {
@@ -50,8 +56,7 @@ public final class PropertyCurve {
             hi++;
         }
         int lo = hi - 1;
-        double f = (temperatureK - kelvin[lo]) / (kelvin[hi] - kelvin[lo]);
-        return values[lo] + f * (values[hi] - values[lo]);
+        return values[lo] + (temperatureK - kelvin[lo]) * slopes[lo];
     }
 
     /**
@@ -64,8 +69,27 @@ public final class PropertyCurve {
             return 0; // NaN included: a failed step is caught by its error norm, not here
         }
         int i = Arrays.binarySearch(kelvin, temperatureK);
-        int lo = i >= 0 ? i : -i - 2;
-        return (values[lo + 1] - values[lo]) / (kelvin[lo + 1] - kelvin[lo]);
+        return slopes[i >= 0 ? i : -i - 2];
+    }
+
+    /**
+     * The curve w₀ f₀(T) + w₁ f₁(T) + …, exact: between the union of the curves' points every term
+     * is linear, and beyond it every term is flat, so the sum is again such a curve.
+     */
+    public static PropertyCurve weightedSum(PropertyCurve[] curves, double[] weights) {
+        double[] points = Arrays.stream(curves).flatMapToDouble(c -> Arrays.stream(c.kelvin)).sorted().distinct()
+                .toArray();
+        boolean allConstant = Arrays.stream(curves).allMatch(PropertyCurve::isConstant);
+        if (allConstant) {
+            points = new double[] {0};
+        }
+        double[] sums = new double[points.length];
+        for (int p = 0; p < points.length; p++) {
+            for (int i = 0; i < curves.length; i++) {
+                sums[p] += weights[i] * curves[i].at(points[p]);
+            }
+        }
+        return new PropertyCurve(points, sums);
     }
 
     /**

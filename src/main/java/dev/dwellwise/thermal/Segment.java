@@ -18,6 +18,11 @@ public interface Segment {
     /** Rate of change of the mass-mean temperature, K/s, at {@code t}. */
     double meanRateAt(double t);
 
+    /** As {@link #meanRateAt(double)}, for a caller that already holds the observation {@code at} t. */
+    default double meanRateAt(double t, Observation at) {
+        return meanRateAt(t);
+    }
+
     /** Through-thickness temperatures at {@code t}, kelvin, at {@link Stepper#profilePositionsM()}. */
     double[] profileAt(double t);
 }

@@ -91,10 +91,14 @@ public final class StageRunner {
             checkBudget();
             requireFinite(segment);
             double[] scan = scanPoints(segment);
-            double eventTime = findEvent(stage.end(), hold, segment, scan);
+            Observation[] seen = new Observation[scan.length];
+            for (int i = 0; i < scan.length; i++) {
+                seen[i] = segment.at(scan[i]); // read once: events, hold and figures all walk these
+            }
+            double eventTime = findEvent(stage.end(), hold, segment, scan, seen);
             double keptEnd = Double.isNaN(eventTime) ? segment.end() : eventTime;
             dense.add(segment, segment.start(), keptEnd);
-            figures.cover(segment, scan, keptEnd);
+            figures.cover(segment, scan, seen, keptEnd);
             largestRate = Math.max(largestRate, figures.largestRate);
             peakK = Math.max(peakK, figures.peakK);
             boolean stageEnds = !Double.isNaN(eventTime) || tooShort(keptEnd, bound);
@@ -146,15 +150,18 @@ public final class StageRunner {
     }
 
     /** The first time in the segment at which the stage's condition is met, or NaN. */
-    private static double findEvent(EndCondition end, HoldClock hold, Segment segment, double[] scan) {
+    private static double findEvent(EndCondition end, HoldClock hold, Segment segment, double[] scan,
+                                    Observation[] seen) {
         if (end instanceof EndCondition.ColdestReaches c) {
-            return EventLocator.firstRise(t -> segment.at(t).coldestK() - c.kelvin(), scan);
+            return EventLocator.firstRise(t -> segment.at(t).coldestK() - c.kelvin(), scan,
+                    i -> seen[i].coldestK() - c.kelvin());
         }
         if (end instanceof EndCondition.HottestFallsTo c) {
-            return EventLocator.firstRise(t -> c.kelvin() - segment.at(t).hottestK(), scan);
+            return EventLocator.firstRise(t -> c.kelvin() - segment.at(t).hottestK(), scan,
+                    i -> c.kelvin() - seen[i].hottestK());
         }
         if (hold != null) {
-            return hold.advance(t -> segment.at(t).coldestK(), scan);
+            return hold.advance(t -> segment.at(t).coldestK(), scan, seen);
         }
         return Double.NaN;
     }
@@ -255,13 +262,13 @@ public final class StageRunner {
             return above ? o -> kelvin - o.coldestK() - CROSSING_MARGIN : o -> o.coldestK() - kelvin;
         }
 
-        /** Walks the scan points; returns the completion time inside them, or NaN. */
-        double advance(DoubleUnaryOperator coldestK, double[] scan) {
+        /** Walks the scan points (observed as {@code seen}); returns the completion time inside them, or NaN. */
+        double advance(DoubleUnaryOperator coldestK, double[] scan, Observation[] seen) {
             DoubleUnaryOperator g = t -> coldestK.applyAsDouble(t) - kelvin;
             for (int i = 0; i + 1 < scan.length; i++) {
                 double p = scan[i];
                 double q = scan[i + 1];
-                boolean aboveAtQ = g.applyAsDouble(q) >= 0;
+                boolean aboveAtQ = seen[i + 1].coldestK() - kelvin >= 0;
                 double enter = p;
                 double leave = q;
                 if (!above && aboveAtQ) {
@@ -313,7 +320,8 @@ public final class StageRunner {
             return Physics.radiationCoefficient(emissivity, o.surfaceK(), stage.surroundingsK(t - stageStart));
         }
 
-        void cover(Segment segment, double[] scan, double keptEnd) {
+        /** Takes in the scan points before {@code keptEnd} (observed as {@code seen}) and keptEnd itself. */
+        void cover(Segment segment, double[] scan, Observation[] seen, double keptEnd) {
             int n = 0;
             while (n < scan.length && scan[n] < keptEnd) {
                 n++;
@@ -321,16 +329,14 @@ public final class StageRunner {
             double[] times = java.util.Arrays.copyOf(scan, n + 1);
             times[n] = keptEnd;
             double[] hot = new double[times.length];
+            double[] rate = new double[times.length];
             for (int i = 0; i < times.length; i++) {
-                Observation o = segment.at(times[i]);
+                Observation o = i < n ? seen[i] : segment.at(keptEnd);
                 hot[i] = o.hottestK();
                 largestHr = Math.max(largestHr, hr(times[i], o));
                 lowK = Math.min(lowK, o.coldestK());
                 peakK = Math.max(peakK, hot[i]);
-            }
-            double[] rate = new double[times.length];
-            for (int i = 0; i < times.length; i++) {
-                rate[i] = segment.meanRateAt(times[i]);
+                rate[i] = segment.meanRateAt(times[i], o);
                 largestRate = Math.max(largestRate, rate[i]);
             }
             for (int i = 1; i + 1 < times.length; i++) {

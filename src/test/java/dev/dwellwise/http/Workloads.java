@@ -1,6 +1,6 @@
 package dev.dwellwise.http;
 
-/** Job bodies for the production tests: an ordinary job and a stiff one that computes for long. */
+/** Job bodies for the production tests: an ordinary job and one that computes for long. */
 public final class Workloads {
 
     /** A small lumped job that passes: a thin steel panel through a bake and a cool-down. */
@@ -20,21 +20,34 @@ public final class Workloads {
             """;
 
     /**
-     * A stiff job: a 10 micrometre foil in a strong air stream has a time constant of about half a
-     * millisecond, and the air ramps, so the part never settles: the explicit integrator needs tens
-     * of thousands of steps for five minutes of ramp, around a second of computing, yet inside the
-     * step and evaluation limits.
+     * A job that computes for long yet stays inside the step and evaluation limits: a 300 mm steel
+     * block at the finest slab resolution (400 cells) through 40 one-hour air ramps between 20 and
+     * 600 °C. About nine thousand implicit steps on 400 cells: a second or more of computing.
      */
-    public static final String STIFF_FOIL = """
-            {
-              "part": { "material": { "densityKgPerM3": 1000, "specificHeatJPerKgK": 500, "conductivityWPerMK": 50 },
-                        "thicknessMm": 0.01, "exposedFaces": 2, "emissivity": 0.5, "initialTemperatureC": 20 },
-              "stages": [ { "name": "ramp", "airTemperatureC": 20, "airEndTemperatureC": 200,
-                            "convectionWPerM2K": 5000, "until": { "seconds": 300 } } ],
-              "model": "lumped",
-              "output": { "sampleSeconds": 10, "series": false }
-            }
-            """;
+    public static final String LONG_SOLVE = longSolve();
+
+    private static String longSolve() {
+        StringBuilder stages = new StringBuilder();
+        for (int i = 0; i < 40; i++) {
+            int from = i % 2 == 0 ? 600 : 20;
+            int to = i % 2 == 0 ? 20 : 600;
+            stages.append(i == 0 ? "" : ",\n").append("    { \"name\": \"ramp ").append(i + 1)
+                    .append("\", \"airTemperatureC\": ").append(from).append(", \"airEndTemperatureC\": ").append(to)
+                    .append(", \"convectionWPerM2K\": 2000, \"until\": { \"seconds\": 3600 } }");
+        }
+        return """
+                {
+                  "part": { "material": "steel-1010", "thicknessMm": 300, "exposedFaces": 2, "emissivity": 0.8,
+                            "initialTemperatureC": 20 },
+                  "stages": [
+                %s
+                  ],
+                  "model": "slab",
+                  "slabCells": 400,
+                  "output": { "sampleSeconds": 60, "series": false }
+                }
+                """.formatted(stages);
+    }
 
     private Workloads() {
     }

@@ -1,0 +1,75 @@
+package dev.dwellwise.thermal;
+
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
+
+/**
+ * Numbers in the sentences of an answer (reasons, check details, chart labels): locale-independent
+ * and deterministic, shared by every layer that writes such text.
+ *
+ * <p>Why not {@code String.format}: it parses its pattern on every call, and an answer carries a
+ * dozen numbers; on the simulation path that parsing cost more than the lumped solve itself.
+ */
+public final class DecimalText {
+
+    private static final double[] SCALE = {1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6};
+
+    private DecimalText() {
+    }
+
+    /**
+     * {@code decimals} places, half away from zero, like {@code %.Nf} (0 to 6 places); "0.0" rather
+     * than "-0.0" for a negative value that rounds to zero.
+     */
+    public static String fixed(double value, int decimals) {
+        double scale = SCALE[decimals];
+        if (!Double.isFinite(value) || Math.abs(value) * scale >= 1e15) {
+            return Double.isFinite(value)
+                    ? BigDecimal.valueOf(value).setScale(decimals, RoundingMode.HALF_UP).toPlainString()
+                    : Double.toString(value);
+        }
+        long units = Math.round(Math.abs(value) * scale);
+        String digits = Long.toString(units);
+        StringBuilder out = new StringBuilder(digits.length() + 3);
+        if (value < 0 && units != 0) {
+            out.append('-');
+        }
+        if (decimals == 0) {
+            return out.append(digits).toString();
+        }
+        int whole = digits.length() - decimals;
+        if (whole <= 0) {
+            out.append("0.");
+            out.append("0".repeat(-whole));
+            return out.append(digits).toString();
+        }
+        return out.append(digits, 0, whole).append('.').append(digits, whole, digits.length()).toString();
+    }
+
+    /**
+     * {@code digits} significant digits like {@code %.Ng}: plain between 1e-4 and 10^digits,
+     * otherwise in scientific notation ("1.250e-05").
+     */
+    public static String significant(double value, int digits) {
+        if (!Double.isFinite(value)) {
+            return Double.toString(value);
+        }
+        if (value == 0) {
+            return fixed(0, digits - 1);
+        }
+        BigDecimal rounded = new BigDecimal(value).round(new MathContext(digits, RoundingMode.HALF_UP));
+        int exponent = rounded.precision() - rounded.scale() - 1;
+        if (exponent >= -4 && exponent < digits) {
+            return rounded.setScale(digits - 1 - exponent, RoundingMode.HALF_UP).toPlainString();
+        }
+        String mantissa = rounded.movePointLeft(exponent).setScale(digits - 1, RoundingMode.HALF_UP).toPlainString();
+        int size = Math.abs(exponent);
+        return mantissa + (exponent < 0 ? "e-" : "e+") + (size < 10 ? "0" : "") + size;
+    }
+
+    /** A whole number without a decimal point, anything else as Java writes a double. */
+    public static String trimmed(double value) {
+        return value == Math.rint(value) && Math.abs(value) < 1e15 ? Long.toString((long) value) : Double.toString(value);
+    }
+}
