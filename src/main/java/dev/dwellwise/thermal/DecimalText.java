@@ -29,7 +29,12 @@ public final class DecimalText {
                     ? BigDecimal.valueOf(value).setScale(decimals, RoundingMode.HALF_UP).toPlainString()
                     : Double.toString(value);
         }
-        long units = Math.round(Math.abs(value) * scale);
+        double scaled = Math.abs(value) * scale;
+        if (Math.abs(scaled - Math.floor(scaled) - 0.5) < 1e-6) {
+            // near a tie the binary product may round the other way than the decimal form does
+            return BigDecimal.valueOf(value).setScale(decimals, RoundingMode.HALF_UP).toPlainString();
+        }
+        long units = Math.round(scaled);
         String digits = Long.toString(units);
         StringBuilder out = new StringBuilder(digits.length() + 3);
         if (value < 0 && units != 0) {
@@ -58,7 +63,8 @@ public final class DecimalText {
         if (value == 0) {
             return fixed(0, digits - 1);
         }
-        BigDecimal rounded = new BigDecimal(value).round(new MathContext(digits, RoundingMode.HALF_UP));
+        // from the shortest decimal form, as the formatter rounds: 1.0005 gives 1.001
+        BigDecimal rounded = BigDecimal.valueOf(value).round(new MathContext(digits, RoundingMode.HALF_UP));
         int exponent = rounded.precision() - rounded.scale() - 1;
         if (exponent >= -4 && exponent < digits) {
             return rounded.setScale(digits - 1 - exponent, RoundingMode.HALF_UP).toPlainString();
@@ -70,6 +76,6 @@ public final class DecimalText {
 
     /** A whole number without a decimal point, anything else as Java writes a double. */
     public static String trimmed(double value) {
-        return value == Math.rint(value) && Math.abs(value) < 1e15 ? Long.toString((long) value) : Double.toString(value);
+        return value == Math.rint(value) && Math.abs(value) < 9e18 ? Long.toString((long) value) : Double.toString(value);
     }
 }

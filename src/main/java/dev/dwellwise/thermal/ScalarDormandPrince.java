@@ -72,9 +72,13 @@ final class ScalarDormandPrince {
      * @param stepGuard called before every step with the steps taken so far in this call: where the
      *                  caller enforces its step, evaluation and wall-clock budgets
      * @throws ComputeLimitExceededException when the step size collapses below the clock's resolution
+     * @throws IllegalArgumentException when {@code limit} is not a finite time after {@code t0}
      */
     double integrate(Equation f, double t0, double y0, double limit, EndCheck end, Pieces pieces,
                      java.util.function.LongConsumer stepGuard) {
+        if (!(limit > t0) || !Double.isFinite(limit)) {
+            throw new IllegalArgumentException("integrate to a finite time after " + t0 + ", not " + limit);
+        }
         double t = t0;
         double y = y0;
         double k1 = f.rate(t, y);
@@ -112,7 +116,7 @@ final class ScalarDormandPrince {
             double difference = yNew - y;
             double hermite = h * k1 - difference;
             double quartic = h * (D1 * k1 + D3 * k3 + D4 * k4 + D5 * k5 + D6 * k6 + D7 * k7);
-            pieces.add(t, tNew, h, y, difference, hermite, difference - h * k7 - hermite, quartic);
+            pieces.add(t, tNew, y, difference, hermite, difference - h * k7 - hermite, quartic);
             taken++;
             t = tNew;
             y = yNew;
@@ -143,29 +147,28 @@ final class ScalarDormandPrince {
     }
 
     /**
-     * The accepted steps of one or more calls: per step its start, end, size and the five
+     * The accepted steps of one or more calls: per step its start, end and the five
      * coefficients of y(t0 + θh) = r1 + θ(r2 + (1−θ)(r3 + θ(r4 + (1−θ) r5))).
      */
     static final class Pieces {
-        private static final int STRIDE = 6;
+        private static final int STRIDE = 5;
         private double[] data = new double[STRIDE * 32];
         private double[] knots = new double[33];
         private int count;
         private int cursor;
         private double lastValue;
 
-        void add(double start, double end, double h, double r1, double r2, double r3, double r4, double r5) {
+        void add(double start, double end, double r1, double r2, double r3, double r4, double r5) {
             if (count == knots.length - 1) {
                 knots = java.util.Arrays.copyOf(knots, 2 * count + 1);
                 data = java.util.Arrays.copyOf(data, STRIDE * 2 * count);
             }
             int o = STRIDE * count;
-            data[o] = h;
-            data[o + 1] = r1;
-            data[o + 2] = r2;
-            data[o + 3] = r3;
-            data[o + 4] = r4;
-            data[o + 5] = r5;
+            data[o] = r1;
+            data[o + 1] = r2;
+            data[o + 2] = r3;
+            data[o + 3] = r4;
+            data[o + 4] = r5;
             knots[count] = start;
             knots[count + 1] = end;
             count++;
@@ -192,19 +195,15 @@ final class ScalarDormandPrince {
             return java.util.Arrays.copyOf(knots, count + 1);
         }
 
-        /** The value at the i-th knot: exact, no interpolation. */
-        double valueAtKnot(int i) {
-            return i < count ? data[STRIDE * i + 1] : lastValue;
-        }
-
         /** The dense output at {@code t}, clamped to the covered span. */
         double valueAt(double t) {
             int i = pieceAt(t);
             int o = STRIDE * i;
-            double theta = (t - knots[i]) / data[o];
-            theta = Math.max(0, Math.min(1, theta));
+            // against the knots themselves: a knot reads the same from the piece on either side
+            double span = knots[i + 1] - knots[i];
+            double theta = span > 0 ? Math.max(0, Math.min(1, (t - knots[i]) / span)) : 0;
             double rest = 1 - theta;
-            return data[o + 1] + theta * (data[o + 2] + rest * (data[o + 3] + theta * (data[o + 4] + rest * data[o + 5])));
+            return data[o] + theta * (data[o + 1] + rest * (data[o + 2] + theta * (data[o + 3] + rest * data[o + 4])));
         }
 
         /** The piece holding {@code t}: the last one used or its successor first, the usual in-order reads. */

@@ -10,8 +10,8 @@
  * per-stage figures. The equations, the integrator, the events and the sampling each live in their
  * own small type, as in Commons Math's {@code ode} package.
  *
- * <p>Two back ends: {@link dev.dwellwise.thermal.LumpedModel} (one temperature, Dormand–Prince from
- * Commons Math) and {@link dev.dwellwise.thermal.SlabModel} (through-thickness conduction: finite
+ * <p>Two back ends: {@link dev.dwellwise.thermal.LumpedModel} (one temperature, Dormand–Prince 5(4)
+ * for one equation) and {@link dev.dwellwise.thermal.SlabModel} (through-thickness conduction: finite
  * volumes on a {@code SlabGrid}, the semi-discrete equations in
  * {@code SlabEquations}, TR-BDF2 steps in {@code TrBdf2}
  * under the step control of {@code SlabStepper}, dense output in

@@ -44,7 +44,8 @@ class EnergyBalanceTest {
         double finalK = h.finalState().meanK();
         double stored = thickness * steel.densityKgPerM3()
                 * quad.integrate(100_000, steel.specificHeat()::at, part.initialK(), finalK);
-        // 1e-5 of the stored heat is 2e-4 K of this part's temperature: fifty times inside the 0.01 K target
-        assertEquals(stored, heatIn, Math.abs(stored) * 1e-5, "J/m2 in vs stored");
+        // measured 2.4e-6 of the stored heat; 5e-6 is 1e-4 K of this part's temperature, a hundred
+        // times inside the 0.01 K target
+        assertEquals(stored, heatIn, Math.abs(stored) * 5e-6, "J/m2 in vs stored");
     }
 }

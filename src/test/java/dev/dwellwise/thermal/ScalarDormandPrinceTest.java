@@ -133,6 +133,15 @@ class ScalarDormandPrinceTest {
     }
 
     @Test
+    void refusesALimitThatIsNotAFiniteTimeAhead() {
+        ScalarDormandPrince dp = new ScalarDormandPrince(1e-7, 1e-9);
+        for (double limit : new double[] {Double.POSITIVE_INFINITY, Double.NaN, 100, 50}) {
+            assertThrows(IllegalArgumentException.class, () -> dp.integrate((t, y) -> -y, 100, 300, limit,
+                    (t, y) -> false, new Pieces(), NO_BUDGET), "limit " + limit);
+        }
+    }
+
+    @Test
     void refusesAHistoryItCannotResolve() {
         ComputeLimitExceededException e = assertThrows(ComputeLimitExceededException.class,
                 () -> new ScalarDormandPrince(1e-7, 1e-9).integrate((t, y) -> Double.NaN, 0, 300, 100,

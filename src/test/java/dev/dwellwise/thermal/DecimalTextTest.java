@@ -1,0 +1,61 @@
+package dev.dwellwise.thermal;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.util.Locale;
+import java.util.SplittableRandom;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The numbers in answer sentences read as {@code String.format} wrote them before: the JDK's
+ * formatter is the reference (java.util.Formatter, conversions 'f' and 'g'), ties included.
+ */
+class DecimalTextTest {
+
+    private static final double[] TIES_AND_EDGES = {0, 0.05, 0.15, 0.25, 0.45, 1.005, 2.675, 180.05, 179.95,
+        -0.05, -0.15, -180.05, 0.00005, 0.00015, 1.0005, 99.995, 999.95, 1e-5, 1.25e-5, 123456.789, 0.1, 0.9999,
+        9999.95, 12345.5, 1e14 + 0.5, 0.001900, 0.0019, 7.30236, 14.0};
+
+    @Test
+    void fixedMatchesTheFormatterOnTiesAndRandomValues() {
+        SplittableRandom random = new SplittableRandom(7);
+        for (int decimals : new int[] {1, 4}) {
+            for (double v : TIES_AND_EDGES) {
+                assertFixed(v, decimals);
+            }
+            for (int i = 0; i < 20_000; i++) {
+                double v = (random.nextDouble() - 0.3) * Math.pow(10, random.nextInt(-3, 6));
+                assertFixed(v, decimals);
+                assertFixed(Math.rint(v * 1e4) / 1e4, decimals); // as Rounding leaves reported figures
+            }
+        }
+    }
+
+    @Test
+    void significantMatchesTheFormatterInPlainAndScientificRanges() {
+        SplittableRandom random = new SplittableRandom(11);
+        for (double v : TIES_AND_EDGES) {
+            assertEquals(String.format(Locale.ROOT, "%.4g", v), DecimalText.significant(v, 4), "value " + v);
+        }
+        for (int i = 0; i < 20_000; i++) {
+            double v = random.nextDouble() * Math.pow(10, random.nextInt(-8, 9));
+            assertEquals(String.format(Locale.ROOT, "%.4g", v), DecimalText.significant(v, 4), "value " + v);
+        }
+    }
+
+    @Test
+    void trimmedWritesWholeNumbersWithoutAPoint() {
+        assertEquals("300", DecimalText.trimmed(300));
+        assertEquals("0.1", DecimalText.trimmed(0.1));
+        assertEquals("2000000000000000", DecimalText.trimmed(2e15));
+        assertEquals("-40", DecimalText.trimmed(-40));
+    }
+
+    private static void assertFixed(double v, int decimals) {
+        String expected = String.format(Locale.ROOT, "%." + decimals + "f", v);
+        if (expected.startsWith("-") && expected.matches("-0\\.0+")) {
+            expected = expected.substring(1); // the one intended difference: no "-0.0"
+        }
+        assertEquals(expected, DecimalText.fixed(v, decimals), "value " + v + " to " + decimals + " places");
+    }
+}
