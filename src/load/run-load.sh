@@ -73,7 +73,7 @@ phase() {
 field() { sed -n "s/.* $2=\([^ ]*\).*/\1/p" <<<"$1"; }
 heap_after_gc_kib() {
   jcmd "$SERVER_PID" GC.run >/dev/null
-  jcmd "$SERVER_PID" GC.heap_info | sed -n 's/.*used \([0-9]*\)K.*/\1/p' | head -1
+  jcmd "$SERVER_PID" GC.heap_info | sed -n 's/.*used \([0-9]*\)K.*/\1/p' | sed -n 1p  # not head: under pipefail its early exit could SIGPIPE sed
 }
 errors() {
   echo $(( $(field "$1" errors_status) + $(field "$1" errors_connect) + $(field "$1" errors_read) \
