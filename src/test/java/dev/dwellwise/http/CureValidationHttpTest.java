@@ -20,9 +20,8 @@ import dev.dwellwise.thermal.MaterialLibrary;
 import dev.dwellwise.thermal.ModelSelector;
 import dev.dwellwise.thermal.SlabModel;
 import java.util.stream.Stream;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -33,17 +32,8 @@ import org.junit.jupiter.params.provider.MethodSource;
  */
 class CureValidationHttpTest {
 
-    private static TestServer server;
-
-    @BeforeAll
-    static void start() {
-        server = TestServer.start();
-    }
-
-    @AfterAll
-    static void stop() {
-        server.close();
-    }
+    @RegisterExtension
+    static final BundledServer server = new BundledServer();
 
     /** The field the answer must name, and the job that is wrong there. */
     private static Arguments badJob(String field, ObjectNode job) {

@@ -19,9 +19,8 @@ import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.function.Function;
 import java.util.stream.Stream;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
@@ -36,19 +35,10 @@ class HttpBadInputTest {
     private static final String UNREADABLE = "urn:dwellwise:problem:unreadable-body";
     private static final String INVALID = "urn:dwellwise:problem:invalid-job";
 
-    private static TestServer server;
+    @RegisterExtension
+    static final BundledServer server = new BundledServer();
     /** Each case is sent once; both tests of a case read its one answer. */
     private static final Map<String, Response> ANSWERS = new ConcurrentHashMap<>();
-
-    @BeforeAll
-    static void start() {
-        server = TestServer.start();
-    }
-
-    @AfterAll
-    static void stop() {
-        server.close();
-    }
 
     /**
      * One bad request, what it must be answered with, and the field the answer must name (or null).

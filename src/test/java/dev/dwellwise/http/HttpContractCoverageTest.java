@@ -18,24 +18,14 @@ import java.util.List;
 import java.util.Set;
 import java.util.TreeSet;
 import java.util.stream.Collectors;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 /** The contract and the running app describe the same service: no route missing from either. */
 class HttpContractCoverageTest {
 
-    private static TestServer server;
-
-    @BeforeAll
-    static void start() {
-        server = TestServer.start();
-    }
-
-    @AfterAll
-    static void stop() {
-        server.close();
-    }
+    @RegisterExtension
+    static final BundledServer server = new BundledServer();
 
     /** {@code GET /v1/materials/{id}} for every HTTP route in Javalin's own router (filters left out). */
     private static Set<String> registeredRoutes() {

@@ -4,13 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 
-import com.atlassian.oai.validator.restassured.OpenApiValidationFilter;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import io.restassured.response.Response;
 import java.util.Map;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 /** Same input, same answer: the MES stores the input hash beside each release. */
 class HttpDeterminismTest {
@@ -32,22 +30,11 @@ class HttpDeterminismTest {
             }
             """;
 
-    private static TestServer server;
-    private static OpenApiValidationFilter contract;
-
-    @BeforeAll
-    static void start() {
-        server = TestServer.start();
-        contract = Contract.strict();
-    }
-
-    @AfterAll
-    static void stop() {
-        server.close();
-    }
+    @RegisterExtension
+    static final BundledServer server = new BundledServer();
 
     private static Response simulate(String body) {
-        Response answer = server.request(contract).contentType("application/json").body(body).post("/v1/simulations");
+        Response answer = server.request().contentType("application/json").body(body).post("/v1/simulations");
         answer.then().statusCode(200);
         return answer;
     }
@@ -65,9 +52,9 @@ class HttpDeterminismTest {
     @Test
     void theSameJobPostedTwiceAsCsvGivesByteIdenticalBodies() {
         String job = Jobs.text(Jobs.small());
-        byte[] first = server.request(contract).contentType("application/json").accept("text/csv").body(job)
+        byte[] first = server.request().contentType("application/json").accept("text/csv").body(job)
                 .post("/v1/simulations").then().statusCode(200).extract().asByteArray();
-        byte[] second = server.request(contract).contentType("application/json").accept("text/csv").body(job)
+        byte[] second = server.request().contentType("application/json").accept("text/csv").body(job)
                 .post("/v1/simulations").then().statusCode(200).extract().asByteArray();
         assertArrayEquals(first, second);
     }

@@ -11,36 +11,23 @@ import static org.hamcrest.Matchers.startsWith;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 
-import com.atlassian.oai.validator.restassured.OpenApiValidationFilter;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 /** The read-only resources: material and example libraries, health probes and the contract itself. */
 class HttpLibrariesTest {
 
-    private static TestServer server;
-    private static OpenApiValidationFilter contract;
-
-    @BeforeAll
-    static void start() {
-        server = TestServer.start();
-        contract = Contract.strict();
-    }
-
-    @AfterAll
-    static void stop() {
-        server.close();
-    }
+    @RegisterExtension
+    static final BundledServer server = new BundledServer();
 
     @Test
     void theMaterialLibraryListsAtLeastEightMaterialsEachWithASource() {
-        server.request(contract).get("/v1/materials").then()
+        server.request().get("/v1/materials").then()
                 .statusCode(200)
                 .contentType("application/json")
                 .body("materials.size()", greaterThanOrEqualTo(8))
@@ -50,27 +37,27 @@ class HttpLibrariesTest {
 
     @Test
     void everyListedMaterialIsServedByItsId() {
-        List<String> ids = server.request(contract).get("/v1/materials").then().statusCode(200)
+        List<String> ids = server.request().get("/v1/materials").then().statusCode(200)
                 .extract().path("materials.id");
         assertFalse(ids.isEmpty());
         for (String id : ids) {
-            server.request(contract).get("/v1/materials/{id}", id).then()
+            server.request().get("/v1/materials/{id}", id).then()
                     .statusCode(200).contentType("application/json").body("id", equalTo(id));
         }
     }
 
     @Test
     void aTabulatedMaterialCarriesItsTableAndAConstantOneDoesNot() {
-        server.request(contract).get("/v1/materials/steel-1010").then().statusCode(200)
+        server.request().get("/v1/materials/steel-1010").then().statusCode(200)
                 .body("table.size()", greaterThanOrEqualTo(2))
                 .body("table[0].temperatureC", equalTo(26.85f));
-        server.request(contract).get("/v1/materials/aluminium-6061-t6").then().statusCode(200)
+        server.request().get("/v1/materials/aluminium-6061-t6").then().statusCode(200)
                 .body("table", equalTo(null));
     }
 
     @Test
     void anUnknownMaterialIdIsANotFoundProblem() {
-        server.request(contract).get("/v1/materials/unobtainium").then()
+        server.request().get("/v1/materials/unobtainium").then()
                 .statusCode(404)
                 .contentType("application/problem+json")
                 .body("type", equalTo("urn:dwellwise:problem:not-found"))
@@ -80,7 +67,7 @@ class HttpLibrariesTest {
 
     @Test
     void theExamplesAreListedEachWithAJob() {
-        server.request(contract).get("/v1/examples").then()
+        server.request().get("/v1/examples").then()
                 .statusCode(200)
                 .contentType("application/json")
                 .body("examples.size()", greaterThanOrEqualTo(3))
@@ -90,17 +77,17 @@ class HttpLibrariesTest {
 
     @Test
     void everyListedExampleIsServedByItsId() {
-        List<String> ids = server.request(contract).get("/v1/examples").then().statusCode(200)
+        List<String> ids = server.request().get("/v1/examples").then().statusCode(200)
                 .extract().path("examples.id");
         for (String id : ids) {
-            server.request(contract).get("/v1/examples/{id}", id).then()
+            server.request().get("/v1/examples/{id}", id).then()
                     .statusCode(200).contentType("application/json").body("id", equalTo(id));
         }
     }
 
     @Test
     void anUnknownExampleIdIsANotFoundProblem() {
-        server.request(contract).get("/v1/examples/no-such-line").then()
+        server.request().get("/v1/examples/no-such-line").then()
                 .statusCode(404)
                 .contentType("application/problem+json")
                 .body("type", equalTo("urn:dwellwise:problem:not-found"))
@@ -109,19 +96,19 @@ class HttpLibrariesTest {
 
     @Test
     void theLivenessProbeAnswersUp() {
-        server.request(contract).get("/health/live").then()
+        server.request().get("/health/live").then()
                 .statusCode(200).contentType("application/json").body("status", equalTo("up"));
     }
 
     @Test
     void theReadinessProbeAnswersReady() {
-        server.request(contract).get("/health/ready").then()
+        server.request().get("/health/ready").then()
                 .statusCode(200).contentType("application/json").body("status", equalTo("ready"));
     }
 
     @Test
     void theContractIsServedAsYamlByteForByteAsTheFileInTheRepository() throws IOException {
-        String served = server.request(contract).get("/openapi.yaml").then()
+        String served = server.request().get("/openapi.yaml").then()
                 .statusCode(200).contentType(startsWith("application/yaml")).extract().asString();
         assertEquals(Files.readString(Path.of("openapi", "dwellwise.yaml"), StandardCharsets.UTF_8), served);
     }

@@ -6,26 +6,16 @@ import static org.hamcrest.Matchers.not;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 
 import io.restassured.response.Response;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 /** Every answer carries a request id: the client's when it sent a usable one, else a fresh UUID. */
 class HttpRequestIdTest {
 
     private static final String UUID = "[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}";
 
-    private static TestServer server;
-
-    @BeforeAll
-    static void start() {
-        server = TestServer.start();
-    }
-
-    @AfterAll
-    static void stop() {
-        server.close();
-    }
+    @RegisterExtension
+    static final BundledServer server = new BundledServer();
 
     @Test
     void aRequestIdTheClientSendsIsEchoed() {

@@ -14,7 +14,6 @@ import static org.hamcrest.Matchers.startsWith;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import com.atlassian.oai.validator.restassured.OpenApiValidationFilter;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.dwellwise.job.Example;
@@ -25,35 +24,23 @@ import io.restassured.response.Response;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Stream;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
 /** {@code POST /v1/simulations} with valid jobs: JSON and CSV answers, each checked against the contract. */
 class HttpSimulationsTest {
 
-    private static TestServer server;
-    private static OpenApiValidationFilter contract;
-
-    @BeforeAll
-    static void start() {
-        server = TestServer.start();
-        contract = Contract.strict();
-    }
-
-    @AfterAll
-    static void stop() {
-        server.close();
-    }
+    @RegisterExtension
+    static final BundledServer server = new BundledServer();
 
     static Stream<String> exampleIds() {
         return ExampleLibrary.bundled(WireJson.create()).all().stream().map(Example::id);
     }
 
     private static Response simulate(ObjectNode job) {
-        return server.request(contract).contentType("application/json").body(Jobs.text(job)).post("/v1/simulations");
+        return server.request().contentType("application/json").body(Jobs.text(job)).post("/v1/simulations");
     }
 
     @ParameterizedTest(name = "the bundled example {0} simulates as it is, with a verdict and a report per stage")
@@ -89,7 +76,7 @@ class HttpSimulationsTest {
     void acceptTextCsvAnswersTheSeriesWithAHeaderAndOneRowPerJsonSample() {
         ObjectNode job = Jobs.small();
         JsonNode json = Jobs.parse(simulate(job).then().statusCode(200).extract().asString());
-        Response csv = server.request(contract).contentType("application/json").accept("text/csv")
+        Response csv = server.request().contentType("application/json").accept("text/csv")
                 .body(Jobs.text(job)).post("/v1/simulations");
         csv.then().statusCode(200).contentType(startsWith("text/csv"));
         List<String> lines = csv.asString().lines().toList();
@@ -104,7 +91,7 @@ class HttpSimulationsTest {
     @Test
     void acceptImageSvgAnswersAChartOfTheSameHistory() {
         ObjectNode job = Jobs.small();
-        Response svg = server.request(contract).contentType("application/json").accept("image/svg+xml")
+        Response svg = server.request().contentType("application/json").accept("image/svg+xml")
                 .body(Jobs.text(job)).post("/v1/simulations");
         svg.then().statusCode(200).contentType(startsWith("image/svg+xml"));
         String body = svg.asString();
@@ -115,7 +102,7 @@ class HttpSimulationsTest {
 
     @Test
     void anAcceptHeaderThatPrefersJsonOverCsvGetsJson() {
-        server.request(contract).contentType("application/json").accept("text/csv;q=0.5, application/json")
+        server.request().contentType("application/json").accept("text/csv;q=0.5, application/json")
                 .body(Jobs.text(Jobs.small())).post("/v1/simulations")
                 .then().statusCode(200).contentType("application/json").body("$", hasKey("series"));
     }

@@ -18,13 +18,12 @@ import static org.hamcrest.Matchers.startsWith;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.atlassian.oai.validator.restassured.OpenApiValidationFilter;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.dwellwise.report.Cautions;
 import io.restassured.response.ValidatableResponse;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 /**
  * {@code POST /v1/release-checks} on a real port: the MES's release question. Valid requests and
@@ -32,7 +31,8 @@ import org.junit.jupiter.api.Test;
  */
 class ReleaseChecksHttpTest {
 
-    private static TestServer server;
+    @RegisterExtension
+    static final BundledServer server = new BundledServer();
 
     /**
      * A batch that fails five ways at once: a preheat that never reaches its target (120 C air, 150 C wanted), a
@@ -52,16 +52,6 @@ class ReleaseChecksHttpTest {
               "limits": { "maxPartTemperatureC": 200, "handlingTemperatureC": 45, "maxHeatingRateCPerMin": 20 }
             }
             """;
-
-    @BeforeAll
-    static void start() {
-        server = TestServer.start();
-    }
-
-    @AfterAll
-    static void stop() {
-        server.close();
-    }
 
     private static ValidatableResponse post(String body, OpenApiValidationFilter contract) {
         return server.request(contract).contentType("application/json").body(body)
