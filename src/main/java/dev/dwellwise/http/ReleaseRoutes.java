@@ -3,6 +3,7 @@ package dev.dwellwise.http;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import dev.dwellwise.job.JobValidator;
 import dev.dwellwise.job.ReleaseRequest;
+import dev.dwellwise.report.ReleaseAnswer;
 import io.javalin.http.Context;
 import java.util.List;
 
@@ -29,7 +30,8 @@ final class ReleaseRoutes {
         // the job's field paths in problems raised past the validator (model, compute limits) start at job.
         ctx.attribute(SimulationRoutes.JOB_PREFIX, JobValidator.RELEASE_JOB_PREFIX);
         ReleaseRequest request = bodies.read(SimulationRoutes.body(ctx, config), ReleaseRequest.class);
-        byte[] answer = services.mapper().writeValueAsBytes(solver.release(request));
-        ctx.contentType(MediaTypes.JSON).result(answer);
+        ReleaseAnswer answer = solver.release(request);
+        ctx.attribute(App.ACCESS_DETAIL, Solver.accessDetail(answer));
+        ctx.contentType(MediaTypes.JSON).result(services.mapper().writeValueAsBytes(answer));
     }
 }

@@ -43,6 +43,17 @@ final class Solver {
                 answer -> answer.release() ? "release" : "hold"));
     }
 
+    /** What the request's access line adds about a simulation: the model, its effort and the verdict. */
+    static String accessDetail(SimulationResult result) {
+        return "model=" + result.model().used() + " steps=" + result.provenance().steps() + " evaluations="
+                + result.provenance().evaluations() + " verdict=" + result.verdict();
+    }
+
+    /** What the request's access line adds about a release check: the MES's audit trail of the decision. */
+    static String accessDetail(ReleaseAnswer answer) {
+        return "batch=" + answer.batchId() + " release=" + answer.release() + " inputSha256=" + answer.inputSha256();
+    }
+
     private <T> T timed(String kind, Supplier<T> solve, Function<T, String> outcomeOf) {
         long start = System.nanoTime();
         String outcome = "error";

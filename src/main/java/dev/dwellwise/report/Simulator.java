@@ -15,8 +15,6 @@ import dev.dwellwise.thermal.SlabModel;
 import dev.dwellwise.thermal.ThermalProblem;
 import java.util.ArrayList;
 import java.util.List;
-import org.slf4j.Logger;
-import org.slf4j.LoggerFactory;
 
 /**
  * The whole simulation of one job: validate, fill defaults, hash, build the problem, choose the
@@ -24,8 +22,6 @@ import org.slf4j.LoggerFactory;
  * gets fresh steppers.
  */
 public final class Simulator {
-
-    private static final Logger LOG = LoggerFactory.getLogger(Simulator.class);
 
     /**
      * What a release decision needs of the output: nothing. No series and no profiles, and one
@@ -73,15 +69,11 @@ public final class Simulator {
      */
     public ReleaseAnswer release(ReleaseRequest request) {
         Job job = JobValidator.validated(request, library, limits);
-        ReleaseAnswer answer = ReleaseAnswer.of(request.batchId(), run(job, job.withOutput(DECISION_ONLY)));
-        LOG.info("release batch={} release={} inputSha256={}", answer.batchId(), answer.release(),
-                answer.inputSha256());
-        return answer;
+        return ReleaseAnswer.of(request.batchId(), run(job, job.withOutput(DECISION_ONLY)));
     }
 
     /** Solves {@code solved} and reports it under the hash of {@code hashed}, the same job as sent. */
     private SimulationResult run(Job hashed, Job solved) {
-        long started = System.nanoTime();
         String hash = CanonicalJson.sha256(hashed);
         ThermalProblem problem = new ProblemBuilder(library).build(solved, budget);
         ModelSelector chosen = solved.slabCells() == null ? selector
@@ -96,12 +88,6 @@ public final class Simulator {
         }
         Provenance provenance = new Provenance(service, hash, selection.model().method(),
                 selection.model().tolerance(), selection.history().steps(), selection.history().evaluations());
-        SimulationResult result = ResultAssembler.assemble(solved, selection, cure, checks, provenance);
-        if (LOG.isInfoEnabled()) {
-            LOG.info("solved model={} stages={} steps={} evaluations={} verdict={} ms={}",
-                    selection.history().modelName(), problem.stages().size(), selection.history().steps(),
-                    selection.history().evaluations(), result.verdict(), (System.nanoTime() - started) / 1_000_000);
-        }
-        return result;
+        return ResultAssembler.assemble(solved, selection, cure, checks, provenance);
     }
 }

@@ -68,11 +68,14 @@ class RequestIdTest {
     }
 
     @Test
-    void theSolversSummaryLineCarriesTheIdOfItsRequest() {
-        try (CapturedLog solver = CapturedLog.of("dev.dwellwise.report.Simulator")) {
+    void theAccessLineOfASolveCarriesItsSummaryAndIsTheRequestsOnlyLine() {
+        try (CapturedLog all = CapturedLog.of(org.slf4j.Logger.ROOT_LOGGER_NAME)) {
             Http.given(service).header("Authorization", "Bearer " + TOKEN).header("X-Request-Id", "solve-1")
                     .contentType("application/json").body(Workloads.PANEL).post("/v1/simulations").then().statusCode(200);
-            assertEquals(List.of("solve-1"), solver.requestIds());
+            assertEquals(List.of("solve-1"), all.requestIds());
+            assertTrue(all.messages().get(0).matches(
+                    "POST /v1/simulations 200 \\d+ms model=lumped steps=\\d+ evaluations=\\d+ verdict=(pass|fail)"),
+                    all.messages().get(0));
         }
     }
 }

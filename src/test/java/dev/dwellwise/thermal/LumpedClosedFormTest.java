@@ -35,8 +35,9 @@ class LumpedClosedFormTest {
 
     @Test
     void aLongStageStaysOnTheExponentialAfterThePartHasSettled() {
-        // same closed form (Incropera Eqs. 5.6-5.7 [M]) over 20,000 s: the part settles near 2,400 s
-        // and the stepper then holds the steady temperature, within 1e-7 K of the exponential
+        // same closed form (Incropera Eqs. 5.6-5.7 [M]) over 20,000 s: the part settles near 2,000 s,
+        // within one step's error scale (about 5e-6 K) of the air, and the stepper then holds the
+        // steady temperature; every 500 s sample stays within 1e-6 K of the exponential
         ThermalPart part = Parts.plate(Parts.steel1010(), 0.002, 2, 0.0, 20);
         ThermalProblem problem = Parts.problem(part, 500,
                 Parts.stage("long soak", 200, 200, 30, new EndCondition.AfterDuration(20_000), 20_000));
