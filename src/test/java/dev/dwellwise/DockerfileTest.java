@@ -109,6 +109,20 @@ class DockerfileTest {
     }
 
     @Test
+    void theLoadRunStartsTheJarWithTheImagesCollectorAndOutOfMemoryExit() throws IOException {
+        // the load figures in the README are the image's: the script must run the JVM the same way
+        List<String> jvmFlags = execForm("ENTRYPOINT").stream()
+                .filter(a -> a.startsWith("-XX:+Use") || a.equals("-XX:+ExitOnOutOfMemoryError")).toList();
+        assertTrue(jvmFlags.stream().anyMatch(a -> a.endsWith("GC")), "the image names its collector: " + jvmFlags);
+        String script = Files.readString(Path.of("src/load/run-load.sh"));
+        java.util.regex.Matcher defaults = java.util.regex.Pattern.compile("JAVA_OPTS=\\$\\{JAVA_OPTS:-([^}]*)}")
+                .matcher(script);
+        assertTrue(defaults.find(), "run-load.sh sets a JAVA_OPTS default");
+        List<String> loadFlags = List.of(defaults.group(1).trim().split("\\s+"));
+        assertTrue(loadFlags.containsAll(jvmFlags), "run-load.sh " + loadFlags + " vs ENTRYPOINT " + jvmFlags);
+    }
+
+    @Test
     void theExposedPortIsThePortTheServiceReadsByDefault() {
         assertEquals("PORT=" + ServiceConfig.DEFAULT_PORT, docker.only("ENV"));
         assertEquals(Integer.toString(ServiceConfig.DEFAULT_PORT), docker.only("EXPOSE"));

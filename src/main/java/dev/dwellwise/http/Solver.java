@@ -11,6 +11,8 @@ import dev.dwellwise.thermal.ComputeLimitExceededException;
 import io.micrometer.core.instrument.MeterRegistry;
 import io.micrometer.core.instrument.Timer;
 import java.time.Duration;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.function.Function;
 import java.util.function.Supplier;
 
@@ -24,6 +26,7 @@ final class Solver {
     private final Simulator simulator;
     private final AdmissionControl admission;
     private final MeterRegistry registry;
+    private final Map<String, Timer> timers = new ConcurrentHashMap<>();
 
     Solver(Simulator simulator, AdmissionControl admission, MeterRegistry registry) {
         this.simulator = simulator;
@@ -72,7 +75,12 @@ final class Solver {
         }
     }
 
+    /** One timer per kind and outcome, looked up without building a meter id on every solve. */
     private Timer timer(String kind, String outcome) {
+        return timers.computeIfAbsent(kind + '\u0000' + outcome, key -> newTimer(kind, outcome));
+    }
+
+    private Timer newTimer(String kind, String outcome) {
         return Timer.builder("dwellwise.solve")
                 .description("Time inside the simulator per request: validation, solve, checks and write-up")
                 .tags("kind", kind, "outcome", outcome)

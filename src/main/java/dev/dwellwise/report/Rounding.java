@@ -23,15 +23,29 @@ final class Rounding {
         return fixed(value, 3);
     }
 
-    /** Dimensionless and derived figures: 6 significant digits. */
+    /**
+     * Dimensionless and derived figures: 6 significant digits, half-even. For magnitudes from 1e-17
+     * to 1e27, as {@link #fixed} does it, by IEEE arithmetic on an exact power of ten (BigDecimal's
+     * exact expansion cost more than the rest of the write-up); beyond, exactly with BigDecimal.
+     * Both are deterministic; they can differ only on a value within rounding of a tie.
+     */
     static double significant(double value) {
         if (value == 0 || !Double.isFinite(value)) {
             return value;
         }
+        int decimals = 5 - (int) Math.floor(Math.log10(Math.abs(value)));
+        if (decimals >= 0 && decimals < SCALE.length) {
+            return Math.rint(value * SCALE[decimals]) / SCALE[decimals];
+        }
+        if (decimals < 0 && -decimals < SCALE.length) {
+            return Math.rint(value / SCALE[-decimals]) * SCALE[-decimals];
+        }
         return new BigDecimal(value).round(new MathContext(6, RoundingMode.HALF_EVEN)).doubleValue();
     }
 
-    private static final double[] SCALE = {1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6};
+    /** Powers of ten that are exact doubles. */
+    private static final double[] SCALE = {1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13,
+        1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22};
 
     /** Rounds half-even to {@code decimals} places (IEEE arithmetic only: cheap and the same on every JVM). */
     static double fixed(double value, int decimals) {
