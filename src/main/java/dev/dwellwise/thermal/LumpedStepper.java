@@ -26,9 +26,15 @@ final class LumpedStepper implements Stepper {
         this.budget = budget;
         this.deadline = Deadline.startingNow(budget);
         this.faces = part.exposedFaces();
-        this.capacity = PropertyCurve.weightedSum(
-                part.layers().stream().map(l -> l.material().specificHeat()).toArray(PropertyCurve[]::new),
-                part.layers().stream().mapToDouble(l -> l.material().densityKgPerM3() * l.thicknessM()).toArray());
+        int layers = part.layers().size();
+        PropertyCurve[] specificHeats = new PropertyCurve[layers];
+        double[] massPerArea = new double[layers];
+        for (int i = 0; i < layers; i++) {
+            Layer layer = part.layers().get(i);
+            specificHeats[i] = layer.material().specificHeat();
+            massPerArea[i] = layer.material().densityKgPerM3() * layer.thicknessM();
+        }
+        this.capacity = PropertyCurve.weightedSum(specificHeats, massPerArea);
         this.integrator = new ScalarDormandPrince(LumpedModel.ABSOLUTE_TOLERANCE, LumpedModel.RELATIVE_TOLERANCE);
         this.temperatureK = part.initialK();
     }

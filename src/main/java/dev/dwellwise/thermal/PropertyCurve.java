@@ -77,12 +77,8 @@ public final class PropertyCurve {
      * is linear, and beyond it every term is flat, so the sum is again such a curve.
      */
     public static PropertyCurve weightedSum(PropertyCurve[] curves, double[] weights) {
-        double[] points = Arrays.stream(curves).flatMapToDouble(c -> Arrays.stream(c.kelvin)).sorted().distinct()
-                .toArray();
-        boolean allConstant = Arrays.stream(curves).allMatch(PropertyCurve::isConstant);
-        if (allConstant) {
-            points = new double[] {0};
-        }
+        // loops, not streams: this runs for every solve, and the stream pipelines cost more than the sum
+        double[] points = unionOfPoints(curves);
         double[] sums = new double[points.length];
         for (int p = 0; p < points.length; p++) {
             for (int i = 0; i < curves.length; i++) {
@@ -90,6 +86,33 @@ public final class PropertyCurve {
             }
         }
         return new PropertyCurve(points, sums);
+    }
+
+    /** The sorted, distinct table temperatures of all the curves; {0} when every curve is a constant. */
+    private static double[] unionOfPoints(PropertyCurve[] curves) {
+        int total = 0;
+        boolean allConstant = true;
+        for (PropertyCurve curve : curves) {
+            total += curve.kelvin.length;
+            allConstant &= curve.isConstant();
+        }
+        if (allConstant) {
+            return new double[] {0};
+        }
+        double[] all = new double[total];
+        int at = 0;
+        for (PropertyCurve curve : curves) {
+            System.arraycopy(curve.kelvin, 0, all, at, curve.kelvin.length);
+            at += curve.kelvin.length;
+        }
+        Arrays.sort(all);
+        int distinct = 0;
+        for (int i = 0; i < all.length; i++) {
+            if (i == 0 || all[i] != all[distinct - 1]) {
+                all[distinct++] = all[i];
+            }
+        }
+        return Arrays.copyOf(all, distinct);
     }
 
     /**

@@ -38,4 +38,23 @@ class PropertyCurveTest {
         }
         assertEquals(sum, CP.integral(280, 900), 1e-8);
     }
+
+    @Test
+    void aWeightedSumIsTheSumOfTheWeightedCurvesEverywhere() {
+        // two tables on different points, one sharing a point, and a constant: the sum must be exact
+        // at and between every table point and flat beyond (the definition, evaluated term by term)
+        PropertyCurve steel = PropertyCurve.table(new double[] {300, 400, 600}, new double[] {434, 487, 559});
+        PropertyCurve coating = PropertyCurve.table(new double[] {250, 400, 500}, new double[] {1100, 1500, 1700});
+        PropertyCurve constant = PropertyCurve.constant(900);
+        PropertyCurve[] curves = {steel, coating, constant};
+        double[] weights = {9.4, 0.12, 0.5};
+        PropertyCurve sum = PropertyCurve.weightedSum(curves, weights);
+        for (double t = 100; t <= 800; t += 2.5) {
+            double expected = 9.4 * steel.at(t) + 0.12 * coating.at(t) + 0.5 * constant.at(t);
+            assertEquals(expected, sum.at(t), 1e-9 * expected, "at " + t + " K");
+        }
+        PropertyCurve constants = PropertyCurve.weightedSum(new PropertyCurve[] {constant, constant}, new double[] {1, 2});
+        assertEquals(2700, constants.at(123), 1e-9);
+        assertEquals(true, constants.isConstant());
+    }
 }
