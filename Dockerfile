@@ -27,7 +27,8 @@ EXPOSE 8080
 # buffers. The parallel collector: a solve allocates short-lived objects only, and on two cores it
 # gave about a tenth more simulations per second than G1 (and than the serial collector the JVM
 # would pick under 1792 MiB), for young pauses of a few milliseconds. An OutOfMemoryError exits, so
-# the orchestrator restarts a clean process. Extra flags go in JAVA_TOOL_OPTIONS. The exec form
+# the orchestrator restarts a clean process. Extra flags go in JAVA_TOOL_OPTIONS, but no second
+# collector: the JVM refuses to start with two. The exec form
 # makes java PID 1, so SIGTERM reaches the JVM's hook. src/load/run-load.sh starts the jar the same way.
 ENTRYPOINT ["java", "-XX:MaxRAMPercentage=75", "-XX:+UseParallelGC", "-XX:+ExitOnOutOfMemoryError", "-jar", "/app/dwellwise.jar"]
 CMD ["serve"]

@@ -100,7 +100,8 @@ phase "$BASE/v1/simulations" "$WORK/job.json" 10 >/dev/null
 for round in 1 2 3 4 5 6 7 8; do
   JIT_BEFORE=$(jit_seconds)
   phase "$BASE/v1/simulations" "$WORK/job.json" 10 >/dev/null
-  COMPILING=$(python3 -c "print(f'{$(jit_seconds) - $JIT_BEFORE:.2f}')")
+  JIT_AFTER=$(jit_seconds)  # on a line of its own, so that a failed jcmd stops the script
+  COMPILING=$(python3 -c "print(f'{$JIT_AFTER - $JIT_BEFORE:.2f}')")
   echo "  round $round: ${COMPILING} s compiling" >&2
   python3 -c "import sys; sys.exit(0 if $COMPILING < 0.2 else 1)" && break
 done

@@ -25,7 +25,7 @@ final class Rounding {
 
     /**
      * Dimensionless and derived figures: 6 significant digits, half-even. For magnitudes from 1e-17
-     * to 1e27, as {@link #fixed} does it, by IEEE arithmetic on an exact power of ten (BigDecimal's
+     * to below 1e28, as {@link #fixed} does it, by IEEE arithmetic on an exact power of ten (BigDecimal's
      * exact expansion cost more than the rest of the write-up); beyond, exactly with BigDecimal.
      * Both are deterministic; they can differ only on a value within rounding of a tie.
      */

@@ -75,7 +75,11 @@ final class LumpedStepper implements Stepper {
     @Override
     public Segment advance(double limit, StopSignal stop) {
         double steadyK = constantStage() ? SteadyState.of(stage, part.emissivity(), temperatureK) : Double.NaN;
-        double settledK = settledK(steadyK);
+        // Settling is allowed only where the steady temperature does not meet the stop condition:
+        // else the jump to it would step over the crossing (a hold temperature a hair below the
+        // oven's), which must be found by integrating. NaN (a ramp, or no settling) never compares.
+        boolean maySettle = stop == StopSignal.NONE || stop.value(Observation.uniform(steadyK)) < 0;
+        double settledK = maySettle ? settledK(steadyK) : Double.NaN;
         if (Math.abs(temperatureK - steadyK) <= settledK) {
             // settled under fixed surroundings: nothing left to integrate, and a thin part with strong
             // convection would otherwise spend the step budget on the explicit method's stability limit

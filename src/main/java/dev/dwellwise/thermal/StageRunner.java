@@ -271,10 +271,12 @@ public final class StageRunner {
                 boolean aboveAtQ = seen[i + 1].coldestK() - kelvin >= 0;
                 double enter = p;
                 double leave = q;
+                // a window that already starts across the line has its crossing at its start (no
+                // bracket to search: the previous segment ended a hair short of it)
                 if (!above && aboveAtQ) {
-                    enter = EventLocator.root(g, p, q);
+                    enter = seen[i].coldestK() - kelvin >= 0 ? p : EventLocator.root(g, p, q);
                 } else if (above && !aboveAtQ) {
-                    leave = EventLocator.root(g, p, q);
+                    leave = seen[i].coldestK() - kelvin < 0 ? p : EventLocator.root(g, p, q);
                 } else if (!above) {
                     continue;
                 }
