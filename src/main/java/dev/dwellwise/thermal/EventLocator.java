@@ -1,6 +1,7 @@
 package dev.dwellwise.thermal;
 
 import java.util.function.DoubleUnaryOperator;
+import java.util.function.IntToDoubleFunction;
 import org.apache.commons.math3.analysis.solvers.BracketingNthOrderBrentSolver;
 import org.apache.commons.math3.optim.MaxEval;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
@@ -40,7 +41,7 @@ final class EventLocator {
      * known to be negative (the caller checked the condition there). {@code atScan} gives g at the
      * i-th scan point, already read; g itself is evaluated only to refine a crossing.
      */
-    static double firstRise(DoubleUnaryOperator g, double[] scan, java.util.function.IntToDoubleFunction atScan) {
+    static double firstRise(DoubleUnaryOperator g, double[] scan, IntToDoubleFunction atScan) {
         double previous = atScan.applyAsDouble(0);
         for (int i = 1; i < scan.length; i++) {
             double current = atScan.applyAsDouble(i);

@@ -182,9 +182,9 @@ final class LumpedStepper implements Stepper {
     /** Dense output of one call: the accepted steps' continuous extension. */
     private static final class LumpedSegment implements Segment {
         private final ScalarDormandPrince.Pieces pieces;
-        private final Rate rate;
+        private final ScalarDormandPrince.Equation rate;
 
-        LumpedSegment(ScalarDormandPrince.Pieces pieces, Rate rate) {
+        LumpedSegment(ScalarDormandPrince.Pieces pieces, ScalarDormandPrince.Equation rate) {
             this.pieces = pieces;
             this.rate = rate;
         }
@@ -211,12 +211,12 @@ final class LumpedStepper implements Stepper {
 
         @Override
         public double meanRateAt(double time) {
-            return rate.at(time, pieces.valueAt(time));
+            return rate.rate(time, pieces.valueAt(time));
         }
 
         @Override
         public double meanRateAt(double time, Observation at) {
-            return rate.at(time, at.meanK());
+            return rate.rate(time, at.meanK());
         }
 
         @Override
@@ -224,11 +224,5 @@ final class LumpedStepper implements Stepper {
             double k = pieces.valueAt(time);
             return new double[] {k, k};
         }
-    }
-
-    /** The right-hand side, for rates read off the dense output. */
-    @FunctionalInterface
-    private interface Rate {
-        double at(double time, double temperatureK);
     }
 }

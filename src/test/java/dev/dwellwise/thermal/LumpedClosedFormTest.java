@@ -148,19 +148,9 @@ class LumpedClosedFormTest {
     private static double reference(double seconds) {
         Material steel = Parts.steel1010();
         double air = Physics.toKelvin(200);
-        FirstOrderDifferentialEquations plate = new FirstOrderDifferentialEquations() {
-            @Override
-            public int getDimension() {
-                return 1;
-            }
-
-            @Override
-            public void computeDerivatives(double t, double[] y, double[] dy) {
-                double flux = 30 * (air - y[0]) + 0.9 * Physics.STEFAN_BOLTZMANN
-                        * (Math.pow(air, 4) - Math.pow(y[0], 4));
-                dy[0] = 2 * flux / (steel.densityKgPerM3() * 0.002 * steel.specificHeat().at(y[0]));
-            }
-        };
+        FirstOrderDifferentialEquations plate = ScalarOde.of((t, k) -> 2 * (30 * (air - k)
+                + 0.9 * Physics.STEFAN_BOLTZMANN * (Math.pow(air, 4) - Math.pow(k, 4)))
+                / (steel.densityKgPerM3() * 0.002 * steel.specificHeat().at(k)));
         double[] y = {Physics.toKelvin(20)};
         new DormandPrince853Integrator(1e-9, 50, 1e-13, 1e-13).integrate(plate, 0, y, seconds, y);
         return y[0];
