@@ -13,13 +13,14 @@ import java.math.RoundingMode;
  */
 public final class DecimalText {
 
-    private static final double[] SCALE = {1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6};
+    /** Exact powers of ten: the places {@link #fixed} takes. */
+    private static final double[] SCALE = {1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10};
 
     private DecimalText() {
     }
 
     /**
-     * {@code decimals} places, half away from zero, like {@code %.Nf} (0 to 6 places); "0.0" rather
+     * {@code decimals} places, half away from zero, like {@code %.Nf} (0 to 10 places); "0.0" rather
      * than "-0.0" for a negative value that rounds to zero.
      */
     public static String fixed(double value, int decimals) {
@@ -62,6 +63,17 @@ public final class DecimalText {
         }
         if (value == 0) {
             return fixed(0, digits - 1);
+        }
+        double magnitude = Math.abs(value);
+        if (magnitude >= 1e-4 && digits <= 7 && magnitude < SCALE[digits - 1]) {
+            // plain whatever the rounding carries into: fixed places by IEEE arithmetic, as fixed() does
+            // them (BigDecimal's decimal expansion cost more than the rest of a model-choice reason)
+            int decimals = digits - 1 - (int) Math.floor(Math.log10(magnitude));
+            double scaled = magnitude * SCALE[decimals];
+            if (Math.abs(scaled - Math.floor(scaled) - 0.5) >= 1e-6) {
+                // 9.9996 to 4 digits is 10.00: the carry into the next power of ten takes a place away
+                return fixed(value, Math.round(scaled) >= SCALE[digits] ? decimals - 1 : decimals);
+            }
         }
         // from the shortest decimal form, as the formatter rounds: 1.0005 gives 1.001
         BigDecimal rounded = BigDecimal.valueOf(value).round(new MathContext(digits, RoundingMode.HALF_UP));

@@ -8,12 +8,15 @@ import java.util.Arrays;
  */
 public final class SampledSeries {
 
+    /** Room for the stage boundaries of a summary answer, which samples nothing else; doubled as needed. */
+    private static final int INITIAL = 8;
+
     private final int capacity;
-    private double[] time = new double[64];
-    private double[] mean = new double[64];
-    private double[] surface = new double[64];
-    private double[] core = new double[64];
-    private int[] stage = new int[64];
+    private double[] time = new double[INITIAL];
+    private double[] mean = new double[INITIAL];
+    private double[] surface = new double[INITIAL];
+    private double[] core = new double[INITIAL];
+    private int[] stage = new int[INITIAL];
     private int size;
 
     public SampledSeries(int capacity) {

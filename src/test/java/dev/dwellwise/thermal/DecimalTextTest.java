@@ -34,13 +34,33 @@ class DecimalTextTest {
     @Test
     void significantMatchesTheFormatterInPlainAndScientificRanges() {
         SplittableRandom random = new SplittableRandom(11);
-        for (double v : TIES_AND_EDGES) {
-            assertEquals(String.format(Locale.ROOT, "%.4g", v), DecimalText.significant(v, 4), "value " + v);
+        for (int digits : new int[] {3, 4, 6}) {
+            for (double v : TIES_AND_EDGES) {
+                assertSignificant(v, digits);
+                if (v != 0) {
+                    assertSignificant(-v, digits); // -0 is the one intended difference, as in fixed
+                }
+            }
+            for (int i = 0; i < 100_000; i++) {
+                double v = random.nextDouble() * Math.pow(10, random.nextInt(-8, 9));
+                assertSignificant(v, digits);
+                assertSignificant(Math.rint(v * 1e6) / 1e6, digits); // short decimals, ties among them
+            }
         }
-        for (int i = 0; i < 20_000; i++) {
-            double v = random.nextDouble() * Math.pow(10, random.nextInt(-8, 9));
-            assertEquals(String.format(Locale.ROOT, "%.4g", v), DecimalText.significant(v, 4), "value " + v);
+    }
+
+    @Test
+    void significantCarriesIntoTheNextPowerOfTenAsTheFormatterDoes() {
+        // just below a power of ten, the rounded value has one more digit before the point
+        for (double v : new double[] {9.9996, 99.996, 999.96, 0.00099996, 0.099996, 9.99949, 9.9995, 0.000099996,
+            0.00009999, 9999.6, 999.94}) {
+            assertSignificant(v, 4);
         }
+    }
+
+    private static void assertSignificant(double v, int digits) {
+        assertEquals(String.format(Locale.ROOT, "%." + digits + "g", v), DecimalText.significant(v, digits),
+                "value " + v + " to " + digits + " digits");
     }
 
     @Test
