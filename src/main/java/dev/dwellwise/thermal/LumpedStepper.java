@@ -143,13 +143,12 @@ final class LumpedStepper implements Stepper {
 
     /**
      * Closer than this to the steady temperature of a stage without ramps, the part is taken as
-     * settled (kelvin; NaN for a ramped stage, which never settles). It is the error scale of one step
-     * there, absolute plus relative tolerance times the temperature: a finer band could be missed for
-     * ever by a stiff part whose steps wander within that scale at the stability limit. At oven
-     * temperatures it is about 5e-6 K, two thousand times finer than the 0.01 K accuracy target.
+     * settled (kelvin; NaN for a ramped stage, which never settles): one step's error scale, as a
+     * finer band could be missed for ever by a stiff part whose steps wander within that scale at
+     * the stability limit.
      */
     private static double settledK(double steadyK) {
-        return LumpedModel.ABSOLUTE_TOLERANCE + LumpedModel.RELATIVE_TOLERANCE * Math.abs(steadyK);
+        return LumpedModel.settleBandK(steadyK);
     }
 
     private boolean constantStage() {
