@@ -2,6 +2,7 @@ package dev.dwellwise.http;
 
 import io.javalin.http.Context;
 import java.util.UUID;
+import java.util.concurrent.ThreadLocalRandom;
 import java.util.regex.Pattern;
 import org.slf4j.MDC;
 
@@ -31,7 +32,19 @@ final class RequestIds {
 
     /** The caller's id when it is safe, else a fresh one. */
     static String chosen(String given) {
-        return given != null && SAFE.matcher(given).matches() ? given : UUID.randomUUID().toString();
+        return given != null && SAFE.matcher(given).matches() ? given : fresh();
+    }
+
+    /**
+     * A random (version 4) UUID from the thread's own generator. An id must be unique, not secret:
+     * {@code UUID.randomUUID()} takes the lock of one shared SecureRandom on every request, and from
+     * time to time reads the kernel's random device while holding it.
+     */
+    static String fresh() {
+        ThreadLocalRandom random = ThreadLocalRandom.current();
+        long high = (random.nextLong() & ~0xF000L) | 0x4000L; // version 4
+        long low = (random.nextLong() & ~0xC000_0000_0000_0000L) | 0x8000_0000_0000_0000L; // IETF variant
+        return new UUID(high, low).toString();
     }
 
     static void clear() {

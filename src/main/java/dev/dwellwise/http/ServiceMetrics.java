@@ -13,6 +13,8 @@ import io.micrometer.prometheusmetrics.PrometheusConfig;
 import io.micrometer.prometheusmetrics.PrometheusMeterRegistry;
 import java.time.Duration;
 import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.TimeUnit;
 import org.eclipse.jetty.util.thread.ThreadPool;
 
@@ -36,6 +38,7 @@ final class ServiceMetrics implements AutoCloseable {
 
     private final PrometheusMeterRegistry registry = new PrometheusMeterRegistry(PrometheusConfig.DEFAULT);
     private final JvmGcMetrics gc = new JvmGcMetrics();
+    private final Map<String, Timer> requestTimers = new ConcurrentHashMap<>();
 
     ServiceMetrics(ThreadPool httpThreads) {
         new JvmMemoryMetrics().bindTo(registry);
@@ -53,11 +56,13 @@ final class ServiceMetrics implements AutoCloseable {
 
     /** One finished request, as {@code http_server_requests_seconds}. */
     void recordRequest(String method, String route, int status, double millis) {
-        Timer.builder("http.server.requests")
-                .description("HTTP requests by method, route template and status")
-                .tags("method", method, "route", route, "status", Integer.toString(status))
-                .serviceLevelObjectives(LATENCY_BUCKETS)
-                .register(registry)
+        // looked up by a plain key: building the meter id (tags, buckets) on every request cost more
+        // than recording; the keys are few (methods, route templates, statuses)
+        requestTimers.computeIfAbsent(method + ' ' + route + ' ' + status, key -> Timer.builder("http.server.requests")
+                        .description("HTTP requests by method, route template and status")
+                        .tags("method", method, "route", route, "status", Integer.toString(status))
+                        .serviceLevelObjectives(LATENCY_BUCKETS)
+                        .register(registry))
                 .record(Math.round(millis * 1_000_000), TimeUnit.NANOSECONDS);
     }
 

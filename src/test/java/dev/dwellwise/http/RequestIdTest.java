@@ -6,8 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import io.restassured.response.Response;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -41,6 +43,20 @@ class RequestIdTest {
     void anUnsafeIdIsReplacedByAFreshOne() {
         Http.given(service).header("X-Request-Id", "evil id; injected=1").get("/health/live").then()
                 .header("X-Request-Id", matchesPattern(UUID));
+    }
+
+    @Test
+    void freshIdsAreDistinctRandomUuidsOfVersionFour() {
+        // RFC 9562, section 5.4: version 4 in the version field, the variant bits 10
+        Set<String> seen = new HashSet<>();
+        for (int i = 0; i < 10_000; i++) {
+            String id = RequestIds.fresh();
+            java.util.UUID parsed = java.util.UUID.fromString(id); // the field UUID is the text pattern
+            assertEquals(4, parsed.version(), id);
+            assertEquals(2, parsed.variant(), id);
+            assertTrue(id.matches(UUID), id);
+            assertTrue(seen.add(id), "repeated " + id);
+        }
     }
 
     @Test
