@@ -15,12 +15,16 @@ import java.util.HexFormat;
 
 /**
  * The canonical form of a job and its SHA-256: keys sorted, absent values left out, every double
- * in its shortest round-trip form (Jackson's Schubfach writer). Two requests that differ only in key
- * order, white space or spelt-out defaults hash the same, which is what the MES stores beside a release.
+ * in its shortest round-trip form (Jackson's Schubfach writer), the text as UTF-8. Two requests that
+ * differ only in key order, white space or spelt-out defaults hash the same, which is what the MES
+ * stores beside a release.
  *
  * <p>Why Jackson's writer and not the JDK's: JDK 17's {@code Double.toString} is not always the
- * shortest form (7e22 comes out as 7.0000000000000004E22) and JDK 19 changed it, so a hash built on
- * it would change with the runtime. Between 1e-300 and 1e16 the two agree on every value.
+ * shortest form (5e22 comes out as 4.9999999999999996E22, 2^-24 with seventeen digits) and JDK 19
+ * changed it, so a hash built on it would change with the runtime. The two agree on every decimal
+ * of up to six significant digits between 1e-12 and 1e16 and on random doubles of ordinary size;
+ * a job holding one of the others (a pre-exponential factor of 5e22, say) hashes differently from
+ * before this form was adopted.
  */
 public final class CanonicalJson {
 
@@ -46,20 +50,20 @@ public final class CanonicalJson {
     }
 
     public static String of(Object value) {
-        return new String(bytes(value), StandardCharsets.UTF_8);
-    }
-
-    public static String sha256(Object value) {
-        return HexFormat.of().formatHex(newDigest().digest(bytes(value)));
-    }
-
-    /** The canonical form as UTF-8, which is what is hashed. */
-    private static byte[] bytes(Object value) {
         try {
-            return MAPPER.writeValueAsBytes(value);
+            return MAPPER.writeValueAsString(value);
         } catch (JsonProcessingException e) {
             throw new IllegalStateException("a bound job always serialises", e);
         }
+    }
+
+    /**
+     * SHA-256 of the canonical text's UTF-8, hex. Through a String on purpose: Jackson's byte writer
+     * would escape characters beyond the Basic Multilingual Plane (an emoji in a stage name) and so
+     * change the hashes the MES has stored.
+     */
+    public static String sha256(Object value) {
+        return HexFormat.of().formatHex(newDigest().digest(of(value).getBytes(StandardCharsets.UTF_8)));
     }
 
     private static MessageDigest newDigest() {

@@ -115,6 +115,15 @@ class ReleaseChecksHttpTest {
     }
 
     @Test
+    void theInputHashOfTheBundledCureWindowExampleIsTheOneTheReadmeShows() {
+        // pins the canonical form: a change to it (key order, number or text form) changes the hashes the
+        // MES has stored, and must be made on purpose, with this value and the README changed together
+        String hash = post(release("B-2026-0412-07", Jobs.example("powder-coat-bracket-cure-window")))
+                .statusCode(200).extract().path("inputSha256");
+        assertEquals("c783126fa10b1bf7acd9c59ed0c849c1b9f14d393d190e5990bf2b0172dfb669", hash);
+    }
+
+    @Test
     void theInputHashIsTheHashOfTheJobAsSentWhateverTheBatch() {
         // The release solve drops the series internally; the hash is still that of the job with its output asked for.
         String simulated = server.request(Contract.strict()).contentType("application/json")

@@ -18,19 +18,22 @@ class CanonicalJsonTest {
 
     @Test
     void doublesAreWrittenInTheirShortestRoundTripForm() {
-        // JDK 17's Double.toString writes 7e22 as 7.0000000000000004E22 and 8.41e21 as 8.409999999999999E21
-        // (JDK-4511638, fixed in JDK 19; from memory); the shortest forms are 7.0E22 and 8.41E21.
-        assertEquals("{\"a\":7.0E22,\"b\":8.41E21,\"c\":1.2,\"d\":0.9}",
-                CanonicalJson.of(Map.of("d", 0.9, "c", 1.2, "b", 8.41e21, "a", 7e22)));
+        // JDK 17's Double.toString writes 5e22 as 4.9999999999999996E22, 8.41e21 as 8.409999999999999E21
+        // and 2^-24 as 5.9604644775390625E-8 (JDK-4511638, fixed in JDK 19; the outputs checked on this
+        // JDK 17); the shortest forms that read back to the same doubles are these.
+        assertEquals("{\"a\":5.0E22,\"b\":8.41E21,\"c\":5.960464477539063E-8,\"d\":1.2,\"e\":0.9}",
+                CanonicalJson.of(Map.of("e", 0.9, "d", 1.2, "c", Math.pow(2, -24), "b", 8.41e21, "a", 5e22)));
+        assertEquals(Math.pow(2, -24), Double.parseDouble("5.960464477539063E-8"));
     }
 
     @Test
-    void theHashIsTheSha256OfTheCanonicalTextInUtf8() throws Exception {
-        Map<String, Object> job = new TreeMap<>(Map.of("name", "cure oven \u00b0C", "airTemperatureC", 200.0,
-                "stages", List.of(1.5, 2.25)));
-        byte[] expected = MessageDigest.getInstance("SHA-256")
-                .digest(CanonicalJson.of(job).getBytes(StandardCharsets.UTF_8));
-        assertEquals(HexFormat.of().formatHex(expected), CanonicalJson.sha256(job));
+    void textIsHashedAsItsUtf8WithCharactersBeyondTheBasicPlaneUnescaped() throws Exception {
+        // U+1F525 is four UTF-8 bytes (RFC 3629, section 3), not a surrogate pair written as escapes
+        Map<String, Object> stage = new TreeMap<>(Map.of("name", "cure oven \uD83D\uDD25 \u00b0C", "airTemperatureC", 200.0));
+        String text = CanonicalJson.of(stage);
+        assertEquals("{\"airTemperatureC\":200.0,\"name\":\"cure oven \uD83D\uDD25 \u00b0C\"}", text);
+        byte[] expected = MessageDigest.getInstance("SHA-256").digest(text.getBytes(StandardCharsets.UTF_8));
+        assertEquals(HexFormat.of().formatHex(expected), CanonicalJson.sha256(stage));
     }
 
     @Test
