@@ -75,10 +75,14 @@ final class LumpedStepper implements Stepper {
     @Override
     public Segment advance(double limit, StopSignal stop) {
         double steadyK = constantStage() ? SteadyState.of(stage, part.emissivity(), temperatureK) : Double.NaN;
-        // Settling is allowed only where the steady temperature does not meet the stop condition:
-        // else the jump to it would step over the crossing (a hold temperature a hair below the
-        // oven's), which must be found by integrating. NaN (a ramp, or no settling) never compares.
-        boolean maySettle = stop == StopSignal.NONE || stop.value(Observation.uniform(steadyK)) < 0;
+        // Settling is allowed only where the steady temperature does not strictly meet the stop
+        // condition: else the jump to it would step over the crossing (a hold temperature a hair below
+        // the oven's), which must be found by integrating. A condition at the steady temperature itself
+        // ("above 200 °C" in a 200 °C oven) is met only in the limit; integrating on, the part would
+        // meet it wherever rounding first put it there, after as many steps as a stiff part takes. So
+        // the part settles, and the condition is met where it does, for the stage's check and the cure
+        // figures alike (both count "at or above"). NaN (a ramp) never compares.
+        boolean maySettle = stop == StopSignal.NONE || stop.value(Observation.uniform(steadyK)) <= 0;
         double settledK = maySettle ? settledK(steadyK) : Double.NaN;
         if (Math.abs(temperatureK - steadyK) <= settledK) {
             // settled under fixed surroundings: nothing left to integrate, and a thin part with strong

@@ -64,12 +64,11 @@ public final class StageRunner {
         Observation first = stepper.observe();
         series.addBoundary(start, first, index, SAME_INSTANT);
         StageFigures figures = new StageFigures(problem.part().emissivity(), stage, start, first);
-        EndCondition watched = watched(stage, first);
-        HoldClock hold = watched instanceof EndCondition.HoldAbove h
+        HoldClock hold = stage.end() instanceof EndCondition.HoldAbove h
                 ? new HoldClock(h.kelvin(), h.seconds(), first.coldestK()) : null;
 
         StageEnd ended = null;
-        if (alreadyMet(watched, first)) {
+        if (alreadyMet(stage.end(), first)) {
             ended = StageEnd.REACHED;
         }
         if (hold != null && hold.isComplete()) {
@@ -88,7 +87,7 @@ public final class StageRunner {
             }
             Segment segment = hold != null && hold.above
                     ? stepper.advance(Math.min(bound, stepper.time() + hold.remaining()), hold.stopSignal())
-                    : stepper.advance(bound, stopSignal(watched, hold));
+                    : stepper.advance(bound, stopSignal(stage.end(), hold));
             checkBudget();
             requireFinite(segment);
             double[] scan = scanPoints(segment);
@@ -96,7 +95,7 @@ public final class StageRunner {
             for (int i = 0; i < scan.length; i++) {
                 seen[i] = segment.at(scan[i]); // read once: events, hold and figures all walk these
             }
-            double eventTime = findEvent(watched, hold, segment, scan, seen);
+            double eventTime = findEvent(stage.end(), hold, segment, scan, seen);
             double keptEnd = Double.isNaN(eventTime) ? segment.end() : eventTime;
             dense.add(segment, segment.start(), keptEnd);
             figures.cover(segment, scan, seen, keptEnd);
@@ -119,32 +118,6 @@ public final class StageRunner {
         return new StageOutcome(stage, start, endTime, ended, first, last, figures.peakK, figures.largestHr,
                 biot, SteadyState.of(stage, problem.part().emissivity(), first.meanK()),
                 hold == null ? 0 : hold.accumulated, figures.largestRate);
-    }
-
-    /**
-     * The condition the solve watches for: the stage's own, except where its temperature is the one
-     * the stage settles the part at ("above 200 °C" in a 200 °C oven, entered from below). The exact
-     * solution approaches that temperature without end, and a solve would meet it wherever rounding
-     * first put the part on it (or, with a stiff part, run out of steps first); it is met instead
-     * where the part comes within {@link LumpedModel#settleBandK} of it (about 5e-6 K), where a lumped
-     * part settles: a well-defined crossing for every back end.
-     */
-    private EndCondition watched(StageConditions stage, Observation first) {
-        EndCondition end = stage.end();
-        if (stage.airStartK() != stage.airEndK() || stage.surroundingsStartK() != stage.surroundingsEndK()) {
-            return end; // under a ramp the part may cross the end temperature, and it is found as usual
-        }
-        double steadyK = SteadyState.of(stage, problem.part().emissivity(), first.meanK());
-        if (end instanceof EndCondition.ColdestReaches c && c.kelvin() == steadyK && first.coldestK() < steadyK) {
-            return new EndCondition.ColdestReaches(steadyK - LumpedModel.settleBandK(steadyK));
-        }
-        if (end instanceof EndCondition.HottestFallsTo c && c.kelvin() == steadyK && first.hottestK() > steadyK) {
-            return new EndCondition.HottestFallsTo(steadyK + LumpedModel.settleBandK(steadyK));
-        }
-        if (end instanceof EndCondition.HoldAbove h && h.kelvin() == steadyK && first.coldestK() < steadyK) {
-            return new EndCondition.HoldAbove(steadyK - LumpedModel.settleBandK(steadyK), h.seconds());
-        }
-        return end;
     }
 
     /**

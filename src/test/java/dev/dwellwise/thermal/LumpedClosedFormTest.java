@@ -136,14 +136,15 @@ class LumpedClosedFormTest {
     }
 
     @Test
-    void aThresholdAtTheAirTemperatureItselfIsReachedWithinTheSettleBandOfIt() {
+    void aThresholdAtTheAirTemperatureItselfIsReachedWhereThePartSettles() {
         // The exact solution approaches 200 C without end; the solve counts it reached where the part
-        // has come within the settle band (1e-7 K + 1e-8 T, about 4.8e-6 K here). Checked with radiation
-        // against the reference integration below, in kelvin, to 1e-6 K.
+        // settles, within the settle band (1e-7 K + 1e-8 T, about 4.8e-6 K) of it. Checked with radiation
+        // against the reference integration below, in kelvin, with 1e-6 K for the two solves' errors.
         double air = Physics.toKelvin(200);
         StageOutcome bake = radiantPlateBake(new EndCondition.ColdestReaches(air));
         assertEquals(StageEnd.REACHED, bake.ended());
-        assertEquals(LumpedModel.settleBandK(air), air - reference(bake.endSeconds()), 1e-6);
+        double gap = air - reference(bake.endSeconds());
+        assertTrue(gap >= -1e-6 && gap <= LumpedModel.settleBandK(air) + 1e-6, gap + " K at " + bake.endSeconds());
     }
 
     @Test
@@ -159,7 +160,7 @@ class LumpedClosedFormTest {
     @Test
     void aFoilHeldToTheAirTemperatureItselfDoesNotSpendTheStepBudgetGettingThere() {
         // 1 um steel at h = 10,000 (tau = 0.17 ms): integrating on until rounding put the part exactly on
-        // 200 C took tens of thousands of steps at the explicit method's stability limit
+        // 200 C ran past the 200,000-step budget at the explicit method's stability limit
         ThermalPart part = Parts.plate(Parts.steel1010(), 0.000001, 2, 0.9, 20);
         ThermalProblem problem = Parts.problem(part, 600, Parts.stage("oven", 200, 200, 10_000,
                 new EndCondition.HoldAbove(Physics.toKelvin(200), 600), 3600));

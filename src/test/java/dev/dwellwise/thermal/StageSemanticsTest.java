@@ -256,39 +256,39 @@ class StageSemanticsTest {
     }
 
     @Test
-    void aConditionAtTheAirTemperatureItselfIsMetWhereThePartComesWithinTheSettleBand() {
-        // 2 mm steel, convection only (h = 30): T = T_air - 180 e^(-t/tau) never reaches 200 C. The solve
-        // counts it reached, and a hold at it begun, where T_air - T is the settle band (1e-7 K + 1e-8 T,
-        // LumpedModel.settleBandK), on every back end. Checked in kelvin against the closed form, as the
-        // time is ill-conditioned there (dT/dt = band / tau); before, it was met wherever rounding first
-        // put the part exactly on 200 C, or (slab) the hold ran out of time after an arbitrary few seconds.
-        // The slab's own error there is some 5e-6 K (its target is 0.05 K), so it is held to 1e-5 K.
+    void aConditionAtTheAirTemperatureItselfIsMetWhereThePartSettles() {
+        // 2 mm steel, convection only (h = 30): T = T_air - 180 e^(-t/tau) never reaches 200 C. The lumped
+        // solve counts it reached, and a hold at it begun, where the part settles: the first step end
+        // within the settle band b = 1e-7 K + 1e-8 T of it, so between tau ln(180 / b) and a few tau
+        // later, not wherever the integration first touched 200 C (by rounding, or by the dense output's
+        // overshoot of a hair), which a stiff part might not do within its step budget at all.
         ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0, 20);
         double air = K + 200;
         double band = 1e-7 + 1e-8 * air;
         double tau = 7832 * 434 * 0.001 / 30;
-        for (ThermalModel model : List.of(new LumpedModel(), new SlabModel())) {
-            for (EndCondition end : List.of(new EndCondition.ColdestReaches(air), new EndCondition.HoldAbove(air, 300))) {
-                ThermalHistory h = StageRunner.run(Parts.problem(part, 60,
-                        Parts.stage("oven", 200, 200, 30, end, 4000)), model);
-                StageOutcome oven = h.stages().get(0);
-                boolean hold = end instanceof EndCondition.HoldAbove;
-                assertEquals(hold ? StageEnd.HOLD_COMPLETE : StageEnd.REACHED, oven.ended(), model.name() + " " + end);
-                double metAt = oven.endSeconds() - (hold ? 300 : 0);
-                assertEquals(band, 180 * Math.exp(-metAt / tau), model instanceof LumpedModel ? 1e-6 : 1e-5,
-                        model.name() + " " + end + " at " + metAt);
-            }
+        for (EndCondition end : List.of(new EndCondition.ColdestReaches(air), new EndCondition.HoldAbove(air, 300))) {
+            StageOutcome oven = run(part, 60, Parts.stage("oven", 200, 200, 30, end, 9000)).stages().get(0);
+            boolean hold = end instanceof EndCondition.HoldAbove;
+            assertEquals(hold ? StageEnd.HOLD_COMPLETE : StageEnd.REACHED, oven.ended(), end.toString());
+            assertSettlesBetween(oven.endSeconds() - (hold ? 300 : 0), tau, 180, band);
         }
     }
 
     @Test
-    void coolingToTheAirTemperatureItselfEndsWhereThePartComesWithinTheSettleBand() {
-        // from 200 C into 28 C air: T = T_air + 172 e^(-t/tau), met where T - T_air is the band
+    void coolingToTheAirTemperatureItselfEndsWhereThePartSettles() {
+        // from 200 C into 28 C air: T = T_air + 172 e^(-t/tau)
         ThermalPart part = Parts.plate(STEEL, 0.002, 2, 0, 200);
         double air = K + 28;
         double tau = 7832 * 434 * 0.001 / 12;
-        ThermalHistory h = run(part, 60, Parts.stage("tunnel", 28, 28, 12, new EndCondition.HottestFallsTo(air), 9000));
-        assertEquals(StageEnd.REACHED, h.stages().get(0).ended());
-        assertEquals(1e-7 + 1e-8 * air, 172 * Math.exp(-h.stages().get(0).endSeconds() / tau), 1e-6);
+        StageOutcome tunnel = run(part, 60, Parts.stage("tunnel", 28, 28, 12, new EndCondition.HottestFallsTo(air),
+                20_000)).stages().get(0);
+        assertEquals(StageEnd.REACHED, tunnel.ended());
+        assertSettlesBetween(tunnel.endSeconds(), tau, 172, 1e-7 + 1e-8 * air);
+    }
+
+    /** {@code t} lies from where the closed-form gap {@code gap0 e^(-t/tau)} enters the band to 5 tau later. */
+    private static void assertSettlesBetween(double t, double tau, double gap0, double band) {
+        double enters = tau * Math.log(gap0 / (band + 1e-7)); // 1e-7 K: the solve's own error there
+        assertTrue(t >= enters && t <= enters + 5 * tau, t + " s, the band entered at " + enters + " s, tau " + tau);
     }
 }
