@@ -81,8 +81,10 @@ public final class Checks {
                     : "stage ended at its " + s(stage.endSeconds() - stage.startSeconds()) + " limit with the "
                             + "coldest point at " + c(stage.end().coldestK()) + ", short of " + c(r.kelvin())
                             + "; the part was heading for a steady " + steady
-                            + (stage.steadyK() < r.kelvin() ? ", so it can never get there under these conditions:"
-                                    + " raise the air temperature or lower the target"
+                            + (stage.steadyK() == r.kelvin() ? ", the target itself, which a part only approaches:"
+                                    + " set the target below the temperature the part settles at"
+                                    : stage.steadyK() < r.kelvin() ? ", so it can never get there under these"
+                                    + " conditions: raise the air temperature or lower the target"
                                     : ": allow more time, or raise the air temperature or convection");
             return new CheckResult("stage-end", status, value, Rounding.temperature(Physics.toCelsius(r.kelvin())),
                     detail, name);
@@ -94,8 +96,10 @@ public final class Checks {
                     : "stage ended at its " + s(stage.endSeconds() - stage.startSeconds()) + " limit with the "
                             + "hottest point still at " + c(stage.end().hottestK()) + ", above " + c(f.kelvin())
                             + "; the part was heading for a steady " + steady
-                            + (stage.steadyK() > f.kelvin() ? ", so it can never get there under these conditions:"
-                                    + " cool with colder air or more airflow"
+                            + (stage.steadyK() == f.kelvin() ? ", the target itself, which a part only approaches:"
+                                    + " set the target above the temperature the part settles at"
+                                    : stage.steadyK() > f.kelvin() ? ", so it can never get there under these"
+                                    + " conditions: cool with colder air or more airflow"
                                     : ": allow more cooling time or more airflow");
             return new CheckResult("stage-end", status, value, Rounding.temperature(Physics.toCelsius(f.kelvin())),
                     detail, name);
@@ -108,7 +112,9 @@ public final class Checks {
                 : "stage ended at its " + s(stage.endSeconds() - stage.startSeconds()) + " limit with the coldest "
                         + "point held at or above " + c(h.kelvin()) + " for only " + s(held) + " of " + s(h.seconds())
                         + "; the part was heading for a steady " + steady
-                        + (stage.steadyK() < h.kelvin() ? ", below the hold temperature: raise the air temperature"
+                        + (stage.steadyK() == h.kelvin() ? ", the hold temperature itself, which a part only"
+                                + " approaches: set the hold below the temperature the part settles at"
+                                : stage.steadyK() < h.kelvin() ? ", below the hold temperature: raise the air temperature"
                                 : ": allow a longer stage");
         return new CheckResult("stage-end", status, Rounding.seconds(held), Rounding.seconds(h.seconds()), detail, name);
     }

@@ -24,8 +24,9 @@ public final class LumpedModel implements ThermalModel {
     /**
      * The error scale of one step at temperature {@code kelvin}: absolute plus relative tolerance
      * times T, about 5e-6 K at oven temperatures, two thousand times finer than the 0.01 K accuracy
-     * target. Closer than this to its steady temperature a part is taken as settled, and a condition
-     * met only in the limit (at the steady temperature itself) as met.
+     * target. Closer than this to its steady temperature a part (lumped or slab) is taken as settled
+     * ({@link SettledSegment}); a finer band could be missed for ever by a stiff part whose steps
+     * wander within that scale at the explicit method's stability limit.
      */
     static double settleBandK(double kelvin) {
         return ABSOLUTE_TOLERANCE + RELATIVE_TOLERANCE * Math.abs(kelvin);

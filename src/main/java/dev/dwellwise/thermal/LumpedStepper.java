@@ -74,20 +74,11 @@ final class LumpedStepper implements Stepper {
      */
     @Override
     public Segment advance(double limit, StopSignal stop) {
-        double steadyK = constantStage() ? SteadyState.of(stage, part.emissivity(), temperatureK) : Double.NaN;
-        // Settling is allowed only where the steady temperature does not strictly meet the stop
-        // condition: else the jump to it would step over the crossing (a hold temperature a hair below
-        // the oven's), which must be found by integrating. A condition at the steady temperature itself
-        // ("above 200 °C" in a 200 °C oven) is met only in the limit; integrating on, the part would
-        // meet it wherever rounding first put it there, after as many steps as a stiff part takes. So
-        // the part settles, and the condition is met where it does, for the stage's check and the cure
-        // figures alike (both count "at or above"). NaN (a ramp) never compares.
-        boolean maySettle = stop == StopSignal.NONE || stop.value(Observation.uniform(steadyK)) <= 0;
-        double settledK = maySettle ? settledK(steadyK) : Double.NaN;
-        if (Math.abs(temperatureK - steadyK) <= settledK) {
+        double steadyK = SettledSegment.steadyK(stage, part.emissivity(), temperatureK, stop);
+        if (SettledSegment.within(temperatureK, steadyK)) {
             // settled under fixed surroundings: nothing left to integrate, and a thin part with strong
             // convection would otherwise spend the step budget on the explicit method's stability limit
-            last = new SettledSegment(t, limit, steadyK, rate(limit, steadyK));
+            last = new SettledSegment(t, limit, steadyK, rate(limit, steadyK), 2);
             t = limit;
             temperatureK = steadyK;
             steps++;
@@ -98,7 +89,7 @@ final class LumpedStepper implements Stepper {
             double now = stop == StopSignal.NONE ? -1 : stop.value(Observation.uniform(k));
             boolean rose = signal[0] < 0 && now >= 0;
             signal[0] = now;
-            return rose || Math.abs(k - steadyK) <= settledK;
+            return rose || SettledSegment.within(k, steadyK);
         };
         ScalarDormandPrince.Pieces pieces = new ScalarDormandPrince.Pieces();
         double reached = integrator.integrate(this::rate, t, temperatureK, limit, ends, pieces, this::guard);
@@ -143,43 +134,6 @@ final class LumpedStepper implements Stepper {
     @Override
     public double[] profilePositionsM() {
         return new double[] {0, part.thicknessM()};
-    }
-
-    /**
-     * Closer than this to the steady temperature of a stage without ramps, the part is taken as
-     * settled (kelvin; NaN for a ramped stage, which never settles): one step's error scale, as a
-     * finer band could be missed for ever by a stiff part whose steps wander within that scale at
-     * the stability limit.
-     */
-    private static double settledK(double steadyK) {
-        return LumpedModel.settleBandK(steadyK);
-    }
-
-    private boolean constantStage() {
-        return stage.airStartK() == stage.airEndK() && stage.surroundingsStartK() == stage.surroundingsEndK();
-    }
-
-    /** A settled part: its steady temperature from {@code start} to {@code end}. */
-    private record SettledSegment(double start, double end, double kelvin, double rate) implements Segment {
-        @Override
-        public double[] knots() {
-            return new double[] {start, end};
-        }
-
-        @Override
-        public Observation at(double time) {
-            return Observation.uniform(kelvin);
-        }
-
-        @Override
-        public double meanRateAt(double time) {
-            return rate;
-        }
-
-        @Override
-        public double[] profileAt(double time) {
-            return new double[] {kelvin, kelvin};
-        }
     }
 
     /** Dense output of one call: the accepted steps' continuous extension. */

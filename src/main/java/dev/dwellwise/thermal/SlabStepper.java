@@ -27,12 +27,15 @@ final class SlabStepper implements Stepper {
     private final ComputeBudget budget;
     private final double relativeTolerance;
     private SurfaceExposure exposure;
+    private StageConditions stage;
     private double t;
     private double[] y;
     private TrBdf2.Derivative derivative;
     private double nextStep = Double.NaN;
     private long steps;
     private SlabSegment last;
+    /** The temperature of the last segment when the part had settled there, else NaN. */
+    private double settledK = Double.NaN;
 
     SlabStepper(ThermalPart part, SlabGrid grid, double relativeTolerance, ComputeBudget budget) {
         this.part = part;
@@ -49,6 +52,7 @@ final class SlabStepper implements Stepper {
 
     @Override
     public void enterStage(StageConditions stage) {
+        this.stage = stage;
         exposure = new SurfaceExposure(stage, t, part.emissivity());
         derivative = method.derivative(t, y, exposure);
         nextStep = Double.NaN;
@@ -67,8 +71,37 @@ final class SlabStepper implements Stepper {
     /** Whether the last attempt was at the smallest step the clock resolves. */
     private boolean lastTriedMinimum;
 
+    /**
+     * One step, or, when every cell is within the settle band of the stage's steady temperature (see
+     * {@link SettledSegment#steadyK}), the settled part to {@code limit}: as for a lumped part, a
+     * condition at the steady temperature itself is then met where the part settles, and a long soak
+     * takes no more steps.
+     */
+    @Override
+    public Segment advance(double limit, StopSignal stop) {
+        if (stage != null && limit > t) {
+            double steadyK = SettledSegment.steadyK(stage, part.emissivity(), readout.mean(y), stop);
+            boolean settled = !Double.isNaN(steadyK);
+            for (int i = 0; i < y.length && settled; i++) {
+                settled = SettledSegment.within(y[i], steadyK);
+            }
+            if (settled) {
+                y = filled(steadyK); // a fresh array: the last step's segment still reads the old one
+                derivative = method.derivative(limit, y, exposure);
+                Segment segment = new SettledSegment(t, limit, steadyK, readout.meanRate(y, derivative.rate()),
+                        grid.profilePositionsM().length);
+                t = limit;
+                settledK = steadyK;
+                steps++;
+                return segment;
+            }
+        }
+        return advance(limit);
+    }
+
     @Override
     public Segment advance(double limit) {
+        settledK = Double.NaN;
         if (derivative == null) {
             throw new IllegalStateException("enterStage must come before advance");
         }
@@ -141,9 +174,15 @@ final class SlabStepper implements Stepper {
     /** Back to the interpolated state at {@code time}; its flux is evaluated afresh for the next step. */
     @Override
     public void cutAt(double time) {
-        y = last.cellsAt(time);
+        y = Double.isNaN(settledK) ? last.cellsAt(time) : filled(settledK);
         t = time;
         derivative = method.derivative(t, y, exposure);
+    }
+
+    private double[] filled(double kelvin) {
+        double[] cells = new double[y.length];
+        Arrays.fill(cells, kelvin);
+        return cells;
     }
 
     @Override

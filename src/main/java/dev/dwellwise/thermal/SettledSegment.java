@@ -1,0 +1,59 @@
+package dev.dwellwise.thermal;
+
+import java.util.Arrays;
+
+/**
+ * A part settled at its steady temperature under fixed surroundings: uniform at {@code kelvin} from
+ * {@code start} to {@code end}, its mean changing at the (residual) {@code rate}. Read exactly at
+ * that temperature, so that a condition at it is met on every reading.
+ *
+ * @param profilePoints how many points a profile has ({@link Stepper#profilePositionsM()})
+ */
+record SettledSegment(double start, double end, double kelvin, double rate, int profilePoints) implements Segment {
+
+    /**
+     * The temperature a part in {@code stage} may settle at under {@code stop}, or NaN where it may
+     * not: under a ramp, or where the steady temperature strictly meets the stop condition (a hold
+     * temperature a hair below the oven's), whose crossing must be found by integrating. A condition
+     * at the steady temperature itself ("above 200 °C" in a 200 °C oven) is met only in the limit:
+     * integrating on, the part would meet it wherever rounding first put it there, after as many
+     * steps as a stiff part takes. So the part settles, and the condition is met where it does, for
+     * the stage's check and the cure figures alike (both count "at or above").
+     *
+     * @param meanK the part's mean temperature now: the steady one where no heat is exchanged at all
+     */
+    static double steadyK(StageConditions stage, double emissivity, double meanK, StopSignal stop) {
+        if (stage.airStartK() != stage.airEndK() || stage.surroundingsStartK() != stage.surroundingsEndK()) {
+            return Double.NaN;
+        }
+        double steadyK = SteadyState.of(stage, emissivity, meanK);
+        return stop == StopSignal.NONE || stop.value(Observation.uniform(steadyK)) <= 0 ? steadyK : Double.NaN;
+    }
+
+    /** Whether {@code kelvin} is within the settle band of {@code steadyK} (never for NaN). */
+    static boolean within(double kelvin, double steadyK) {
+        return Math.abs(kelvin - steadyK) <= LumpedModel.settleBandK(steadyK);
+    }
+
+    @Override
+    public double[] knots() {
+        return new double[] {start, end};
+    }
+
+    @Override
+    public Observation at(double time) {
+        return Observation.uniform(kelvin);
+    }
+
+    @Override
+    public double meanRateAt(double time) {
+        return rate;
+    }
+
+    @Override
+    public double[] profileAt(double time) {
+        double[] profile = new double[profilePoints];
+        Arrays.fill(profile, kelvin);
+        return profile;
+    }
+}
