@@ -68,6 +68,13 @@ public final class Checks {
                         + ": the part heats evenly enough for the lumped model", null);
     }
 
+    /**
+     * A target at the steady temperature itself is only approached: the solve counts it met once the
+     * part has settled to within about 5e-6 K (see SettledSegment), which a longer stage gives.
+     */
+    private static final String ONLY_SETTLED = "which a part only approaches (it counts as reached once "
+            + "the part has settled to within about 5e-6 K, which a longer stage would give): ";
+
     static CheckResult stageEnd(StageOutcome stage) {
         String name = stage.conditions().name();
         boolean met = stage.ended() != StageEnd.MAX_SECONDS;
@@ -81,8 +88,8 @@ public final class Checks {
                     : "stage ended at its " + s(stage.endSeconds() - stage.startSeconds()) + " limit with the "
                             + "coldest point at " + c(stage.end().coldestK()) + ", short of " + c(r.kelvin())
                             + "; the part was heading for a steady " + steady
-                            + (stage.steadyK() == r.kelvin() ? ", the target itself, which a part only approaches:"
-                                    + " set the target below the temperature the part settles at"
+                            + (stage.steadyK() == r.kelvin() ? ", the target itself, " + ONLY_SETTLED
+                                    + "set the target below the temperature the part settles at"
                                     : stage.steadyK() < r.kelvin() ? ", so it can never get there under these"
                                     + " conditions: raise the air temperature or lower the target"
                                     : ": allow more time, or raise the air temperature or convection");
@@ -96,8 +103,8 @@ public final class Checks {
                     : "stage ended at its " + s(stage.endSeconds() - stage.startSeconds()) + " limit with the "
                             + "hottest point still at " + c(stage.end().hottestK()) + ", above " + c(f.kelvin())
                             + "; the part was heading for a steady " + steady
-                            + (stage.steadyK() == f.kelvin() ? ", the target itself, which a part only approaches:"
-                                    + " set the target above the temperature the part settles at"
+                            + (stage.steadyK() == f.kelvin() ? ", the target itself, " + ONLY_SETTLED
+                                    + "set the target above the temperature the part settles at"
                                     : stage.steadyK() > f.kelvin() ? ", so it can never get there under these"
                                     + " conditions: cool with colder air or more airflow"
                                     : ": allow more cooling time or more airflow");
@@ -112,8 +119,8 @@ public final class Checks {
                 : "stage ended at its " + s(stage.endSeconds() - stage.startSeconds()) + " limit with the coldest "
                         + "point held at or above " + c(h.kelvin()) + " for only " + s(held) + " of " + s(h.seconds())
                         + "; the part was heading for a steady " + steady
-                        + (stage.steadyK() == h.kelvin() ? ", the hold temperature itself, which a part only"
-                                + " approaches: set the hold below the temperature the part settles at"
+                        + (stage.steadyK() == h.kelvin() ? ", the hold temperature itself, " + ONLY_SETTLED
+                                + "set the hold below the temperature the part settles at"
                                 : stage.steadyK() < h.kelvin() ? ", below the hold temperature: raise the air temperature"
                                 : ": allow a longer stage");
         return new CheckResult("stage-end", status, Rounding.seconds(held), Rounding.seconds(h.seconds()), detail, name);

@@ -26,7 +26,8 @@ public interface Stepper {
 
     /**
      * As {@link #advance(double)}, but the stepper may cover many steps in one segment and end it
-     * where {@code stop} rises through zero. Back ends that step one at a time keep the default.
+     * where {@code stop} rises through zero, and may settle the part where {@code stop} allows it
+     * ({@link SettledSegment#steadyK}). The default ignores the signal and steps as {@link #advance(double)}.
      */
     default Segment advance(double limit, StopSignal stop) {
         return advance(limit);

@@ -4,8 +4,9 @@ package dev.dwellwise.thermal;
  * A hint from the stage runner to a stepper: the stage's condition, as a function of the part's
  * temperatures that rises through zero where the condition becomes met. A stepper that can stop
  * there ends its segment at (or just after) that point instead of running on to its limit; the
- * runner still places the event itself on the dense output, so honouring the hint saves work and
- * never changes an answer.
+ * runner still places the event itself on the dense output, so ending there saves work and changes
+ * no answer. It also tells a stepper whether the part may settle ({@link SettledSegment#steadyK}):
+ * never where the steady temperature strictly meets the condition, whose crossing must be found.
  */
 @FunctionalInterface
 public interface StopSignal {
