@@ -1,5 +1,6 @@
 package dev.dwellwise.cure;
 
+import dev.dwellwise.thermal.ScalarOde;
 import java.util.OptionalDouble;
 import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.exception.MaxCountExceededException;
@@ -99,17 +100,7 @@ public final class DegreeOfCure {
     }
 
     private static FirstOrderDifferentialEquations equations(Kinetics kinetics, DoubleUnaryOperator kelvin) {
-        return new FirstOrderDifferentialEquations() {
-            @Override
-            public int getDimension() {
-                return 1;
-            }
-
-            @Override
-            public void computeDerivatives(double t, double[] y, double[] yDot) {
-                yDot[0] = kinetics.rate(kelvin.applyAsDouble(t), y[0]);
-            }
-        };
+        return ScalarOde.of((t, alpha) -> kinetics.rate(kelvin.applyAsDouble(t), alpha));
     }
 
     private static double clamp(double degree) {

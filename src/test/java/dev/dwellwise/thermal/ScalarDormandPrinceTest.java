@@ -101,7 +101,7 @@ class ScalarDormandPrinceTest {
         new ScalarDormandPrince(LumpedModel.ABSOLUTE_TOLERANCE, LumpedModel.RELATIVE_TOLERANCE)
                 .integrate(f, 0, 293.15, 600, (t, y) -> false, pieces, NO_BUDGET);
         DormandPrince853Integrator reference = new DormandPrince853Integrator(1e-9, 100, 1e-12, 1e-13);
-        FirstOrderDifferentialEquations ode = ScalarOde.of(f);
+        FirstOrderDifferentialEquations ode = ScalarOde.of(f::rate);
         double[] y = {293.15};
         double t = 0;
         for (double next = 7.5; next <= 600; next += 7.5) { // off the step ends

@@ -1,14 +1,19 @@
 package dev.dwellwise.thermal;
 
+import java.util.function.DoubleBinaryOperator;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 
-/** One equation dy/dt = f(t, y) in the form Commons Math's integrators take: the tests' reference runs. */
-final class ScalarOde {
+/**
+ * One equation dy/dt = f(t, y) in the form Commons Math's integrators take: the degree-of-cure
+ * kinetics, and the tests' reference runs of the thermal balance.
+ */
+public final class ScalarOde {
 
     private ScalarOde() {
     }
 
-    static FirstOrderDifferentialEquations of(ScalarDormandPrince.Equation f) {
+    /** {@code rate} applied as (t, y). */
+    public static FirstOrderDifferentialEquations of(DoubleBinaryOperator rate) {
         return new FirstOrderDifferentialEquations() {
             @Override
             public int getDimension() {
@@ -17,7 +22,7 @@ final class ScalarOde {
 
             @Override
             public void computeDerivatives(double t, double[] y, double[] yDot) {
-                yDot[0] = f.rate(t, y[0]);
+                yDot[0] = rate.applyAsDouble(t, y[0]);
             }
         };
     }
