@@ -170,4 +170,30 @@ class SlabStageRunnerTest {
             previous = steps;
         }
     }
+
+    @Test
+    void aConditionAtTheAirTemperatureIsMetOnlyOnceTheWholeSlabHasSettled() {
+        // One face of 10 mm at Bi = 1: "reaches 200 C" in 200 C air is met where the slab has settled, or
+        // where a step's dense output first touches 200 C, so never before the coldest point has crossed
+        // 200 C less 1.2 settle bands (found by integrating the same steps). A settle judged too early,
+        // or a jump to the steady temperature, would report it sooner.
+        double air = Physics.toKelvin(200);
+        double band = LumpedModel.settleBandK(air);
+        double atAir = StageRunner.run(Parts.problem(wall(1, 20), 600, Parts.stage("oven", 200, 200, 60,
+                new EndCondition.ColdestReaches(air), 20_000)), new SlabModel()).stages().get(0).endSeconds();
+        StageOutcome near = StageRunner.run(Parts.problem(wall(1, 20), 600, Parts.stage("oven", 200, 200, 60,
+                new EndCondition.ColdestReaches(air - 1.2 * band), 20_000)), new SlabModel()).stages().get(0);
+        assertEquals(StageEnd.REACHED, near.ended());
+        assertTrue(atAir >= near.endSeconds(), atAir + " s against " + near.endSeconds() + " s");
+    }
+
+    @Test
+    void aThresholdAHairBelowTheAirIsStillFoundByIntegratingNotBySettling() {
+        // 1e-6 K below 200 C, inside the settle band: the crossing itself, located on the dense output
+        double threshold = Physics.toKelvin(200) - 1e-6;
+        StageOutcome oven = StageRunner.run(Parts.problem(wall(1, 20), 600, Parts.stage("oven", 200, 200, 60,
+                new EndCondition.ColdestReaches(threshold), 20_000)), new SlabModel()).stages().get(0);
+        assertEquals(StageEnd.REACHED, oven.ended());
+        assertEquals(threshold, oven.end().coldestK(), 1e-9);
+    }
 }
