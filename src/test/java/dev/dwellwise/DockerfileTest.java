@@ -9,6 +9,8 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import javax.xml.parsers.DocumentBuilderFactory;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
@@ -115,7 +117,7 @@ class DockerfileTest {
                 .filter(a -> a.startsWith("-XX:+Use") || a.equals("-XX:+ExitOnOutOfMemoryError")).toList();
         assertTrue(jvmFlags.stream().anyMatch(a -> a.endsWith("GC")), "the image names its collector: " + jvmFlags);
         String script = Files.readString(Path.of("src/load/run-load.sh"));
-        java.util.regex.Matcher defaults = java.util.regex.Pattern.compile("JAVA_OPTS=\\$\\{JAVA_OPTS:-([^}]*)}")
+        Matcher defaults = Pattern.compile("JAVA_OPTS=\\$\\{JAVA_OPTS:-([^}]*)}")
                 .matcher(script);
         assertTrue(defaults.find(), "run-load.sh sets a JAVA_OPTS default");
         List<String> loadFlags = List.of(defaults.group(1).trim().split("\\s+"));

@@ -42,7 +42,9 @@ class PropertyCurveTest {
     @Test
     void aWeightedSumIsTheSumOfTheWeightedCurvesEverywhere() {
         // two tables on different points, one sharing a point, and a constant: the sum must be exact
-        // at and between every table point and flat beyond (the definition, evaluated term by term)
+        // at and between every table point and flat beyond (the definition, evaluated term by term).
+        // The inputs only need to differ: steel's c from Incropera Table A.1, AISI 1010 [M]; the
+        // coating's and the constant invented.
         PropertyCurve steel = PropertyCurve.table(new double[] {300, 400, 600}, new double[] {434, 487, 559});
         PropertyCurve coating = PropertyCurve.table(new double[] {250, 400, 500}, new double[] {1100, 1500, 1700});
         PropertyCurve constant = PropertyCurve.constant(900);
