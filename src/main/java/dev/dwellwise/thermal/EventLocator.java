@@ -2,6 +2,7 @@ package dev.dwellwise.thermal;
 
 import java.util.function.DoubleUnaryOperator;
 import java.util.function.IntToDoubleFunction;
+import org.apache.commons.math3.analysis.solvers.AllowedSolution;
 import org.apache.commons.math3.analysis.solvers.BracketingNthOrderBrentSolver;
 import org.apache.commons.math3.optim.MaxEval;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
@@ -33,6 +34,18 @@ final class EventLocator {
         }
         BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-15, TIME_ACCURACY, 1e-14, 5);
         return solver.solve(200, g::applyAsDouble, a, b);
+    }
+
+    /**
+     * A root of g in [a, b], where g(a) > 0 >= g(b), on the side of b: g there is at most zero, so
+     * the caller may rely on the condition that g &lt;= 0 describes.
+     */
+    static double rootAtOrAfter(DoubleUnaryOperator g, double a, double b) {
+        if (g.applyAsDouble(b) == 0) {
+            return b;
+        }
+        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-15, TIME_ACCURACY, 1e-14, 5);
+        return solver.solve(200, g::applyAsDouble, a, b, AllowedSolution.RIGHT_SIDE);
     }
 
     /**

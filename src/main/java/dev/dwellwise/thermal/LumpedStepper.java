@@ -3,8 +3,8 @@ package dev.dwellwise.thermal;
 /**
  * Steps the lumped balance of {@link LumpedModel} with {@link ScalarDormandPrince}: each
  * {@link #advance} is one integration call, to the limit, to the step after the runner's stop
- * signal rises through zero, or to the step at which the part settles; the accepted steps'
- * continuous extension is the dense output.
+ * signal rises through zero, or to where, inside its last step, the part comes within the settle
+ * band (the next call then settles it); the accepted steps' continuous extension is the dense output.
  */
 final class LumpedStepper implements Stepper {
 
@@ -94,9 +94,15 @@ final class LumpedStepper implements Stepper {
         ScalarDormandPrince.Pieces pieces = new ScalarDormandPrince.Pieces();
         double reached = integrator.integrate(this::rate, t, temperatureK, limit, ends, pieces, this::guard);
         steps += pieces.size();
-        last = new LumpedSegment(pieces, this::rate);
+        if (SettledSegment.within(pieces.lastValue(), steadyK)) {
+            // the last step came within the band: end where it entered, and the next call settles
+            // there, so the settling time does not depend on where that (long) step happened to end
+            reached = SettledSegment.bandEntry(time -> Math.abs(pieces.valueAt(time) - steadyK),
+                    pieces.lastStart(), reached, steadyK);
+        }
+        last = new LumpedSegment(pieces, this::rate, reached);
+        temperatureK = reached < pieces.end() ? pieces.valueAt(reached) : pieces.lastValue();
         t = reached;
-        temperatureK = pieces.lastValue();
         return last;
     }
 
@@ -140,10 +146,13 @@ final class LumpedStepper implements Stepper {
     private static final class LumpedSegment implements Segment {
         private final ScalarDormandPrince.Pieces pieces;
         private final ScalarDormandPrince.Equation rate;
+        /** The end: the last step's end, or a time inside it where the part came within the settle band. */
+        private final double end;
 
-        LumpedSegment(ScalarDormandPrince.Pieces pieces, ScalarDormandPrince.Equation rate) {
+        LumpedSegment(ScalarDormandPrince.Pieces pieces, ScalarDormandPrince.Equation rate, double end) {
             this.pieces = pieces;
             this.rate = rate;
+            this.end = end;
         }
 
         @Override
@@ -153,12 +162,14 @@ final class LumpedStepper implements Stepper {
 
         @Override
         public double end() {
-            return pieces.end();
+            return end;
         }
 
         @Override
         public double[] knots() {
-            return pieces.knots();
+            double[] knots = pieces.knots();
+            knots[knots.length - 1] = end;
+            return knots;
         }
 
         @Override

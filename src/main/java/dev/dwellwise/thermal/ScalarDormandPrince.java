@@ -187,6 +187,11 @@ final class ScalarDormandPrince {
             return knots[count];
         }
 
+        /** Start of the last step. */
+        double lastStart() {
+            return knots[count - 1];
+        }
+
         double lastValue() {
             return lastValue;
         }

@@ -1,6 +1,7 @@
 package dev.dwellwise.thermal;
 
 import java.util.Arrays;
+import java.util.function.DoubleUnaryOperator;
 
 /**
  * A part settled at its steady temperature under fixed surroundings: uniform at {@code kelvin} from
@@ -33,6 +34,18 @@ record SettledSegment(double start, double end, double kelvin, double rate, int 
     /** Whether {@code kelvin} is within the settle band of {@code steadyK} (never for NaN). */
     static boolean within(double kelvin, double steadyK) {
         return Math.abs(kelvin - steadyK) <= LumpedModel.settleBandK(steadyK);
+    }
+
+    /**
+     * Where a part that is outside the settle band at {@code from} and within it at {@code to} comes
+     * within it: a time in (from, to] at which {@code deviationK}, the largest distance of the part's
+     * temperatures from {@code steadyK}, is at most the band. A stepper ends its step there and settles:
+     * the part then settles where it enters the band, wherever its last step happened to end (a step
+     * near the steady temperature can span several time constants).
+     */
+    static double bandEntry(DoubleUnaryOperator deviationK, double from, double to, double steadyK) {
+        double band = LumpedModel.settleBandK(steadyK);
+        return EventLocator.rootAtOrAfter(t -> deviationK.applyAsDouble(t) - band, from, to);
     }
 
     @Override

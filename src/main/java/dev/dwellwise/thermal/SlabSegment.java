@@ -43,6 +43,11 @@ final class SlabSegment implements Segment {
         return new double[] {start, end};
     }
 
+    /** The same interpolant ending at {@code time} inside the step: a cubic is fixed by its values and slopes at two points. */
+    SlabSegment endingAt(double time) {
+        return new SlabSegment(readout, exposure, start, time, startK, startRate, cellsAt(time), ratesAt(time));
+    }
+
     /** Cell temperatures at t, kelvin; t is held inside the step (round-off at its ends). */
     double[] cellsAt(double t) {
         double h = end - start;

@@ -75,28 +75,50 @@ final class SlabStepper implements Stepper {
      * One step, or, when every cell is within the settle band of the stage's steady temperature (see
      * {@link SettledSegment#steadyK}), the settled part to {@code limit}: as for a lumped part, a
      * condition at the steady temperature itself is then met where the part settles, and a long soak
-     * takes no more steps.
+     * takes no more steps. A step that brings every cell within the band ends where it did so.
      */
     @Override
     public Segment advance(double limit, StopSignal stop) {
-        if (stage != null && limit > t) {
-            double steadyK = SettledSegment.steadyK(stage, part.emissivity(), readout.mean(y), stop);
-            boolean settled = !Double.isNaN(steadyK);
-            for (int i = 0; i < y.length && settled; i++) {
-                settled = SettledSegment.within(y[i], steadyK);
-            }
-            if (settled) {
-                y = filled(steadyK); // a fresh array: the last step's segment still reads the old one
-                derivative = method.derivative(limit, y, exposure);
-                Segment segment = new SettledSegment(t, limit, steadyK, readout.meanRate(y, derivative.rate()),
-                        grid.profilePositionsM().length);
-                t = limit;
-                settledK = steadyK;
-                steps++;
-                return segment;
+        if (stage == null || !(limit > t)) {
+            return advance(limit);
+        }
+        double steadyK = SettledSegment.steadyK(stage, part.emissivity(), readout.mean(y), stop);
+        if (withinBand(y, steadyK)) {
+            y = filled(steadyK); // a fresh array: the last step's segment still reads the old one
+            derivative = method.derivative(limit, y, exposure);
+            Segment segment = new SettledSegment(t, limit, steadyK, readout.meanRate(y, derivative.rate()),
+                    grid.profilePositionsM().length);
+            t = limit;
+            settledK = steadyK;
+            steps++;
+            return segment;
+        }
+        advance(limit);
+        if (withinBand(y, steadyK)) {
+            // the step came within the band: end it where it entered, and the next call settles there
+            SlabSegment step = last;
+            double entry = SettledSegment.bandEntry(time -> deviation(step.cellsAt(time), steadyK), step.start(),
+                    step.end(), steadyK);
+            if (entry < step.end()) {
+                last = step.endingAt(entry);
+                cutAt(entry);
             }
         }
-        return advance(limit);
+        return last;
+    }
+
+    /** Whether every cell is within the settle band of {@code steadyK} (never for NaN). */
+    private static boolean withinBand(double[] cells, double steadyK) {
+        return deviation(cells, steadyK) <= LumpedModel.settleBandK(steadyK);
+    }
+
+    /** The largest distance of the cells from {@code steadyK}, kelvin; NaN where the part may not settle. */
+    private static double deviation(double[] cells, double steadyK) {
+        double largest = 0;
+        for (double k : cells) {
+            largest = Math.max(largest, Math.abs(k - steadyK));
+        }
+        return largest;
     }
 
     @Override

@@ -56,6 +56,28 @@ class SlabSegmentTest {
     }
 
     @Test
+    void aStepEndedInsideItselfReadsAsTheFullStepUpToItsNewEnd() {
+        // a cubic is fixed by its values and slopes at two points: the shortened Hermite interpolant
+        // is the same cubic on [start, cut]
+        ThermalPart part = Parts.plate(Parts.testSolid(), 0.02, 2, 0.9, 20);
+        Stepper stepper = new SlabModel().newStepper(part, ComputeBudget.standard());
+        stepper.enterStage(Parts.stage("bake", 200, 200, 40, new EndCondition.AfterDuration(600), 600));
+        for (int i = 0; i < 6; i++) {
+            SlabSegment step = (SlabSegment) stepper.advance(600);
+            double cut = step.start() + 0.61 * (step.end() - step.start());
+            SlabSegment shortened = step.endingAt(cut);
+            assertEquals(cut, shortened.end());
+            // rates are differences of ~500 K values over the step: rounding of 1e-13 K over its length
+            double rateRounding = 1e-13 * 500 / (cut - step.start());
+            for (double f : new double[] {0, 0.2, 0.5, 0.9, 1}) {
+                double t = step.start() + f * (cut - step.start());
+                assertArrayEquals(step.cellsAt(t), shortened.cellsAt(t), 1e-9, "at " + t);
+                assertArrayEquals(step.ratesAt(t), shortened.ratesAt(t), rateRounding, "rates at " + t);
+            }
+        }
+    }
+
+    @Test
     void cuttingMovesTheStateToTheInterpolatedInstant() {
         ThermalPart part = Parts.plate(Parts.testSolid(), 0.02, 2, 0.9, 20);
         Stepper stepper = new SlabModel().newStepper(part, ComputeBudget.standard());

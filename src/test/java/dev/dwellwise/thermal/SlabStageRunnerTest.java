@@ -188,6 +188,34 @@ class SlabStageRunnerTest {
     }
 
     @Test
+    void aConditionAtTheAirTemperatureIsMetWhereTheSlabComesWithinTheSettleBand() {
+        // Near the air temperature the slab's error exceeds the band (its tolerance is 1e-7 T), so the
+        // time is judged against the slab's own profile, read 1 ms before it: every point is then just
+        // outside the band, by less than the 1 ms of approach (~1e-5 of it) plus the faces' reading
+        // beyond the cells (~1e-4). Settling on one cell, or at the end of the step that entered the
+        // band (a step there spans several time constants), leaves the part far from, or well inside,
+        // the band at that moment. Both faces exposed read as one face: the same wall, mirrored.
+        double air = Physics.toKelvin(200);
+        double band = LumpedModel.settleBandK(air);
+        for (EndCondition end : List.of(new EndCondition.ColdestReaches(air), new EndCondition.HoldAbove(air, 300))) {
+            for (int faces : new int[] {1, 2}) {
+                StageConditions oven = Parts.stage("oven", 200, 200, 60, end, 20_000);
+                StageOutcome outcome = StageRunner.run(Parts.problem(wall(faces, 20), 600, oven), new SlabModel())
+                        .stages().get(0);
+                double met = outcome.endSeconds() - (end instanceof EndCondition.HoldAbove ? 300 : 0);
+                Profile before = StageRunner.run(new ThermalProblem(wall(faces, 20), List.of(oven), 600,
+                        ComputeBudget.standard(), List.of(met - 1e-3)), new SlabModel()).profiles().get(0);
+                double deviation = 0;
+                for (double k : before.temperaturesK()) {
+                    deviation = Math.max(deviation, Math.abs(k - air));
+                }
+                assertTrue(deviation > band && deviation < 1.01 * band, end + ", " + faces + " face(s): "
+                        + deviation / band + " bands from the air 1 ms before it was met at " + met + " s");
+            }
+        }
+    }
+
+    @Test
     void aThresholdAHairBelowTheAirIsStillFoundByIntegratingNotBySettling() {
         // 1e-6 K below 200 C, inside the settle band: the crossing itself, located on the dense output
         double threshold = Physics.toKelvin(200) - 1e-6;
