@@ -36,6 +36,8 @@ final class SlabStepper implements Stepper {
     private SlabSegment last;
     /** The temperature of the last segment when the part had settled there, else NaN. */
     private double settledK = Double.NaN;
+    /** Whether the state is where the last step entered the settle band (cut there by {@link #advance(double, StopSignal)}). */
+    private boolean atBandEntry;
 
     SlabStepper(ThermalPart part, SlabGrid grid, double relativeTolerance, ComputeBudget budget) {
         this.part = part;
@@ -53,6 +55,7 @@ final class SlabStepper implements Stepper {
     @Override
     public void enterStage(StageConditions stage) {
         this.stage = stage;
+        atBandEntry = false;
         exposure = new SurfaceExposure(stage, t, part.emissivity());
         derivative = method.derivative(t, y, exposure);
         nextStep = Double.NaN;
@@ -83,7 +86,9 @@ final class SlabStepper implements Stepper {
             return advance(limit);
         }
         double steadyK = SettledSegment.steadyK(stage, part.emissivity(), readout.mean(y), stop);
-        if (withinBand(y, steadyK)) {
+        // at a band entry the part settles even where the steady temperature, recomputed from the
+        // mean (no heat exchanged), has moved by a rounding unit since the cut
+        if (withinBand(y, steadyK) || atBandEntry && !Double.isNaN(steadyK)) {
             y = filled(steadyK); // a fresh array: the last step's segment still reads the old one
             derivative = method.derivative(limit, y, exposure);
             Segment segment = new SettledSegment(t, limit, steadyK, readout.meanRate(y, derivative.rate()),
@@ -103,13 +108,14 @@ final class SlabStepper implements Stepper {
                 last = step.endingAt(entry);
                 cutAt(entry);
             }
+            atBandEntry = true;
         }
         return last;
     }
 
     /** Whether every cell is within the settle band of {@code steadyK} (never for NaN). */
     private static boolean withinBand(double[] cells, double steadyK) {
-        return deviation(cells, steadyK) <= LumpedModel.settleBandK(steadyK);
+        return !Double.isNaN(steadyK) && deviation(cells, steadyK) <= LumpedModel.settleBandK(steadyK);
     }
 
     /** The largest distance of the cells from {@code steadyK}, kelvin; NaN where the part may not settle. */
@@ -124,6 +130,7 @@ final class SlabStepper implements Stepper {
     @Override
     public Segment advance(double limit) {
         settledK = Double.NaN;
+        atBandEntry = false;
         if (derivative == null) {
             throw new IllegalStateException("enterStage must come before advance");
         }
@@ -196,6 +203,7 @@ final class SlabStepper implements Stepper {
     /** Back to the interpolated state at {@code time}; its flux is evaluated afresh for the next step. */
     @Override
     public void cutAt(double time) {
+        atBandEntry = false;
         y = Double.isNaN(settledK) ? last.cellsAt(time) : filled(settledK);
         t = time;
         derivative = method.derivative(t, y, exposure);

@@ -27,7 +27,10 @@ public interface Stepper {
     /**
      * As {@link #advance(double)}, but the stepper may cover many steps in one segment and end it
      * where {@code stop} rises through zero, and may settle the part where {@code stop} allows it
-     * ({@link SettledSegment#steadyK}). The default ignores the signal and steps as {@link #advance(double)}.
+     * ({@link SettledSegment#steadyK}): it then ends the segment inside its last step, where the part
+     * came within the settle band ({@link SettledSegment#bandEntry}), and settles on the next call.
+     * The segment always ends where the stepper's clock and state then are. The default ignores the
+     * signal and steps as {@link #advance(double)}.
      */
     default Segment advance(double limit, StopSignal stop) {
         return advance(limit);

@@ -7,6 +7,8 @@ package dev.dwellwise.thermal;
  * runner still places the event itself on the dense output, so ending there saves work and changes
  * no answer. It also tells a stepper whether the part may settle ({@link SettledSegment#steadyK}):
  * never where the steady temperature strictly meets the condition, whose crossing must be found.
+ * Where it may, a crossing that the dense output shows after the part came within the settle band
+ * is an overshoot of the interpolant, and the stepper's cut at the band entry drops it.
  */
 @FunctionalInterface
 public interface StopSignal {
