@@ -290,7 +290,7 @@ class StageSemanticsTest {
     /**
      * {@code t} is where the closed-form gap {@code gap0 e^(-t/tau)} enters the band, give or take the
      * solve's own error there: a temperature error e moves that time by tau ln(b / (b -+ e)); e up to
-     * half the band is allowed (measured: under a tenth of it), so the window is -0.41 tau to +0.69 tau.
+     * half the band is allowed (measured: a sixth of it at most), so the window is -0.41 tau to +0.69 tau.
      */
     private static void assertSettlesWhereTheBandIsEntered(double t, double tau, double gap0, double band) {
         double earliest = tau * Math.log(gap0 / (1.5 * band));
