@@ -36,8 +36,7 @@ final class EventLocator {
         if (gb == 0) {
             return b;
         }
-        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-15, TIME_ACCURACY, 1e-14, 5);
-        return solver.solve(200, g::applyAsDouble, a, b);
+        return solver().solve(200, g::applyAsDouble, a, b);
     }
 
     /**
@@ -48,8 +47,12 @@ final class EventLocator {
         if (g.applyAsDouble(b) == 0) {
             return b;
         }
-        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-15, TIME_ACCURACY, 1e-14, 5);
-        return solver.solve(200, g::applyAsDouble, a, b, AllowedSolution.RIGHT_SIDE);
+        return solver().solve(200, g::applyAsDouble, a, b, AllowedSolution.RIGHT_SIDE);
+    }
+
+    /** A fresh solver per root: it counts its evaluations, and solves run in parallel. */
+    private static BracketingNthOrderBrentSolver solver() {
+        return new BracketingNthOrderBrentSolver(1e-15, TIME_ACCURACY, 1e-14, 5);
     }
 
     /**
