@@ -8,10 +8,13 @@ import java.util.Map;
 final class RunningService implements AutoCloseable {
 
     private final Javalin app;
+    /** Read once at start: once a stop has closed the listener, Javalin reports a negative port. */
+    private final int port;
     private boolean stopped;
 
     private RunningService(Javalin app) {
         this.app = app;
+        this.port = app.port();
     }
 
     static RunningService start(Map<String, String> env) {
@@ -31,7 +34,7 @@ final class RunningService implements AutoCloseable {
     }
 
     int port() {
-        return app.port();
+        return port;
     }
 
     String url(String path) {
