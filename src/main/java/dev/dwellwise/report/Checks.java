@@ -88,11 +88,12 @@ public final class Checks {
                     : "stage ended at its " + s(stage.endSeconds() - stage.startSeconds()) + " limit with the "
                             + "coldest point at " + c(stage.end().coldestK()) + ", short of " + c(r.kelvin())
                             + "; the part was heading for a steady " + steady
-                            + (stage.steadyK() == r.kelvin() ? ", the target itself, " + ONLY_SETTLED
-                                    + "set the target below the temperature the part settles at"
-                                    : stage.steadyK() < r.kelvin() ? ", so it can never get there under these"
-                                    + " conditions: raise the air temperature or lower the target"
-                                    : ": allow more time, or raise the air temperature or convection");
+                            + advice(stage.steadyK(), r.kelvin(), true,
+                                    ", the target itself, " + ONLY_SETTLED
+                                            + "set the target below the temperature the part settles at",
+                                    ", so it can never get there under these conditions: raise the air temperature"
+                                            + " or lower the target",
+                                    ": allow more time, or raise the air temperature or convection");
             return new CheckResult("stage-end", status, value, Rounding.temperature(Physics.toCelsius(r.kelvin())),
                     detail, name);
         }
@@ -103,11 +104,12 @@ public final class Checks {
                     : "stage ended at its " + s(stage.endSeconds() - stage.startSeconds()) + " limit with the "
                             + "hottest point still at " + c(stage.end().hottestK()) + ", above " + c(f.kelvin())
                             + "; the part was heading for a steady " + steady
-                            + (stage.steadyK() == f.kelvin() ? ", the target itself, " + ONLY_SETTLED
-                                    + "set the target above the temperature the part settles at"
-                                    : stage.steadyK() > f.kelvin() ? ", so it can never get there under these"
-                                    + " conditions: cool with colder air or more airflow"
-                                    : ": allow more cooling time or more airflow");
+                            + advice(stage.steadyK(), f.kelvin(), false,
+                                    ", the target itself, " + ONLY_SETTLED
+                                            + "set the target above the temperature the part settles at",
+                                    ", so it can never get there under these conditions: cool with colder air or"
+                                            + " more airflow",
+                                    ": allow more cooling time or more airflow");
             return new CheckResult("stage-end", status, value, Rounding.temperature(Physics.toCelsius(f.kelvin())),
                     detail, name);
         }
@@ -119,11 +121,25 @@ public final class Checks {
                 : "stage ended at its " + s(stage.endSeconds() - stage.startSeconds()) + " limit with the coldest "
                         + "point held at or above " + c(h.kelvin()) + " for only " + s(held) + " of " + s(h.seconds())
                         + "; the part was heading for a steady " + steady
-                        + (stage.steadyK() == h.kelvin() ? ", the hold temperature itself, " + ONLY_SETTLED
-                                + "set the hold below the temperature the part settles at"
-                                : stage.steadyK() < h.kelvin() ? ", below the hold temperature: raise the air temperature"
-                                : ": allow a longer stage");
+                        + advice(stage.steadyK(), h.kelvin(), true,
+                                ", the hold temperature itself, " + ONLY_SETTLED
+                                        + "set the hold below the temperature the part settles at",
+                                ", below the hold temperature: raise the air temperature",
+                                ": allow a longer stage");
         return new CheckResult("stage-end", status, Rounding.seconds(held), Rounding.seconds(h.seconds()), detail, name);
+    }
+
+    /**
+     * What a stage that ran out of time should change, by where the part was heading: to the target
+     * itself ({@code atTarget}), short of it ({@code never}: no stage length gets there), or past it
+     * ({@code more}: a longer stage would). {@code rising}: the target is reached from below.
+     */
+    private static String advice(double steadyK, double targetK, boolean rising, String atTarget, String never,
+                                 String more) {
+        if (steadyK == targetK) {
+            return atTarget;
+        }
+        return (rising ? steadyK < targetK : steadyK > targetK) ? never : more;
     }
 
     static CheckResult peakTemperature(ThermalHistory history, double limitC) {
