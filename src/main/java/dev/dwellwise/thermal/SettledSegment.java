@@ -36,6 +36,20 @@ record SettledSegment(double start, double end, double kelvin, double rate, int 
         return Math.abs(kelvin - steadyK) <= LumpedModel.settleBandK(steadyK);
     }
 
+    /** Whether every one of {@code cells} is within the settle band of {@code steadyK} (never for NaN). */
+    static boolean within(double[] cells, double steadyK) {
+        return deviationK(cells, steadyK) <= LumpedModel.settleBandK(steadyK);
+    }
+
+    /** The largest distance of {@code cells} from {@code steadyK}, kelvin; NaN for NaN. */
+    static double deviationK(double[] cells, double steadyK) {
+        double largest = 0;
+        for (double k : cells) {
+            largest = Math.max(largest, Math.abs(k - steadyK));
+        }
+        return largest;
+    }
+
     /**
      * Where a part that is outside the settle band at {@code from} and within it at {@code to} comes
      * within it: a time in (from, to] at which {@code deviationK}, the largest distance of the part's

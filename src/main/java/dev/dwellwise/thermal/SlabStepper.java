@@ -88,7 +88,7 @@ final class SlabStepper implements Stepper {
         double steadyK = SettledSegment.steadyK(stage, part.emissivity(), readout.mean(y), stop);
         // at a band entry the part settles even where the steady temperature, recomputed from the
         // mean (no heat exchanged), has moved by a rounding unit since the cut
-        if (withinBand(y, steadyK) || atBandEntry && !Double.isNaN(steadyK)) {
+        if (SettledSegment.within(y, steadyK) || atBandEntry && !Double.isNaN(steadyK)) {
             y = filled(steadyK); // a fresh array: the last step's segment still reads the old one
             derivative = method.derivative(limit, y, exposure);
             Segment segment = new SettledSegment(t, limit, steadyK, readout.meanRate(y, derivative.rate()),
@@ -99,11 +99,11 @@ final class SlabStepper implements Stepper {
             return segment;
         }
         advance(limit);
-        if (withinBand(y, steadyK)) {
+        if (SettledSegment.within(y, steadyK)) {
             // the step came within the band: end it where it entered, and the next call settles there
             SlabSegment step = last;
-            double entry = SettledSegment.bandEntry(time -> deviation(step.cellsAt(time), steadyK), step.start(),
-                    step.end(), steadyK);
+            double entry = SettledSegment.bandEntry(time -> SettledSegment.deviationK(step.cellsAt(time), steadyK),
+                    step.start(), step.end(), steadyK);
             if (entry < step.end()) {
                 last = step.endingAt(entry);
                 cutAt(entry);
@@ -111,20 +111,6 @@ final class SlabStepper implements Stepper {
             atBandEntry = true;
         }
         return last;
-    }
-
-    /** Whether every cell is within the settle band of {@code steadyK} (never for NaN). */
-    private static boolean withinBand(double[] cells, double steadyK) {
-        return !Double.isNaN(steadyK) && deviation(cells, steadyK) <= LumpedModel.settleBandK(steadyK);
-    }
-
-    /** The largest distance of the cells from {@code steadyK}, kelvin; NaN where the part may not settle. */
-    private static double deviation(double[] cells, double steadyK) {
-        double largest = 0;
-        for (double k : cells) {
-            largest = Math.max(largest, Math.abs(k - steadyK));
-        }
-        return largest;
     }
 
     @Override
