@@ -1,7 +1,6 @@
 package dev.dwellwise.http;
 
 import io.micrometer.core.instrument.MeterRegistry;
-import io.micrometer.core.instrument.Timer;
 import io.micrometer.core.instrument.binder.jetty.JettyServerThreadPoolMetrics;
 import io.micrometer.core.instrument.binder.jvm.ClassLoaderMetrics;
 import io.micrometer.core.instrument.binder.jvm.JvmGcMetrics;
@@ -13,8 +12,6 @@ import io.micrometer.prometheusmetrics.PrometheusConfig;
 import io.micrometer.prometheusmetrics.PrometheusMeterRegistry;
 import java.time.Duration;
 import java.util.List;
-import java.util.Map;
-import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.TimeUnit;
 import org.eclipse.jetty.util.thread.ThreadPool;
 
@@ -38,7 +35,8 @@ final class ServiceMetrics implements AutoCloseable {
 
     private final PrometheusMeterRegistry registry = new PrometheusMeterRegistry(PrometheusConfig.DEFAULT);
     private final JvmGcMetrics gc = new JvmGcMetrics();
-    private final Map<String, Timer> requestTimers = new ConcurrentHashMap<>();
+    private final LatencyTimers requestTimers = new LatencyTimers(registry, "http.server.requests",
+            "HTTP requests by method, route template and status", "method", "route", "status");
 
     ServiceMetrics(ThreadPool httpThreads) {
         new JvmMemoryMetrics().bindTo(registry);
@@ -56,13 +54,7 @@ final class ServiceMetrics implements AutoCloseable {
 
     /** One finished request, as {@code http_server_requests_seconds}. */
     void recordRequest(String method, String route, int status, double millis) {
-        // looked up by a plain key: building the meter id (tags, buckets) on every request cost more
-        // than recording; the keys are few (methods, route templates, statuses)
-        requestTimers.computeIfAbsent(method + ' ' + route + ' ' + status, key -> Timer.builder("http.server.requests")
-                        .description("HTTP requests by method, route template and status")
-                        .tags("method", method, "route", route, "status", Integer.toString(status))
-                        .serviceLevelObjectives(LATENCY_BUCKETS)
-                        .register(registry))
+        requestTimers.get(method, route, Integer.toString(status))
                 .record(Math.round(millis * 1_000_000), TimeUnit.NANOSECONDS);
     }
 

@@ -9,10 +9,7 @@ import dev.dwellwise.report.SimulationResult;
 import dev.dwellwise.report.Simulator;
 import dev.dwellwise.thermal.ComputeLimitExceededException;
 import io.micrometer.core.instrument.MeterRegistry;
-import io.micrometer.core.instrument.Timer;
 import java.time.Duration;
-import java.util.Map;
-import java.util.concurrent.ConcurrentHashMap;
 import java.util.function.Function;
 import java.util.function.Supplier;
 
@@ -25,13 +22,13 @@ final class Solver {
 
     private final Simulator simulator;
     private final AdmissionControl admission;
-    private final MeterRegistry registry;
-    private final Map<String, Timer> timers = new ConcurrentHashMap<>();
+    private final LatencyTimers timers;
 
     Solver(Simulator simulator, AdmissionControl admission, MeterRegistry registry) {
         this.simulator = simulator;
         this.admission = admission;
-        this.registry = registry;
+        this.timers = new LatencyTimers(registry, "dwellwise.solve",
+                "Time inside the simulator per request: validation, solve, checks and write-up", "kind", "outcome");
     }
 
     /** Solves a job, its field paths under {@code prefix} ("" when the job is the body). */
@@ -71,20 +68,7 @@ final class Solver {
             outcome = "compute-limit";
             throw e;
         } finally {
-            timer(kind, outcome).record(Duration.ofNanos(System.nanoTime() - start));
+            timers.get(kind, outcome).record(Duration.ofNanos(System.nanoTime() - start));
         }
-    }
-
-    /** One timer per kind and outcome, looked up without building a meter id on every solve. */
-    private Timer timer(String kind, String outcome) {
-        return timers.computeIfAbsent(kind + '\u0000' + outcome, key -> newTimer(kind, outcome));
-    }
-
-    private Timer newTimer(String kind, String outcome) {
-        return Timer.builder("dwellwise.solve")
-                .description("Time inside the simulator per request: validation, solve, checks and write-up")
-                .tags("kind", kind, "outcome", outcome)
-                .serviceLevelObjectives(ServiceMetrics.LATENCY_BUCKETS)
-                .register(registry);
     }
 }

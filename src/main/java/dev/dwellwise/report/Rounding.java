@@ -1,5 +1,6 @@
 package dev.dwellwise.report;
 
+import dev.dwellwise.thermal.DecimalText;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
@@ -34,25 +35,21 @@ final class Rounding {
             return value;
         }
         int decimals = 5 - (int) Math.floor(Math.log10(Math.abs(value)));
-        if (decimals >= 0 && decimals < SCALE.length) {
-            return Math.rint(value * SCALE[decimals]) / SCALE[decimals];
+        if (decimals >= 0 && decimals <= DecimalText.MAX_EXACT_POWER) {
+            return Math.rint(value * DecimalText.powerOfTen(decimals)) / DecimalText.powerOfTen(decimals);
         }
-        if (decimals < 0 && -decimals < SCALE.length) {
-            return Math.rint(value / SCALE[-decimals]) * SCALE[-decimals];
+        if (decimals < 0 && -decimals <= DecimalText.MAX_EXACT_POWER) {
+            return Math.rint(value / DecimalText.powerOfTen(-decimals)) * DecimalText.powerOfTen(-decimals);
         }
         return new BigDecimal(value).round(new MathContext(6, RoundingMode.HALF_EVEN)).doubleValue();
     }
-
-    /** Powers of ten that are exact doubles. */
-    private static final double[] SCALE = {1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13,
-        1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22};
 
     /** Rounds half-even to {@code decimals} places (IEEE arithmetic only: cheap and the same on every JVM). */
     static double fixed(double value, int decimals) {
         if (!Double.isFinite(value)) {
             return value;
         }
-        double scale = SCALE[decimals];
+        double scale = DecimalText.powerOfTen(decimals);
         return Math.rint(value * scale) / scale;
     }
 }

@@ -13,14 +13,25 @@ import java.math.RoundingMode;
  */
 public final class DecimalText {
 
-    /** Exact powers of ten: the places {@link #fixed} takes. */
-    private static final double[] SCALE = {1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10};
+    /** The powers of ten that are exact doubles: 10^22 is the last (5^23 needs more than 53 bits). */
+    private static final double[] SCALE = {1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13,
+        1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22};
+    /** The largest n whose 10^n {@link #powerOfTen} gives exactly. */
+    public static final int MAX_EXACT_POWER = SCALE.length - 1;
 
     private DecimalText() {
     }
 
     /**
-     * {@code decimals} places, half away from zero, like {@code %.Nf} (0 to 10 places); "0.0" rather
+     * 10^n exactly, for 0 &le; n &le; {@link #MAX_EXACT_POWER}: what the roundings here and in the report
+     * multiply by, so that a value is scaled with a single IEEE rounding.
+     */
+    public static double powerOfTen(int n) {
+        return SCALE[n];
+    }
+
+    /**
+     * {@code decimals} places, half away from zero, like {@code %.Nf} (0 to {@link #MAX_EXACT_POWER} places); "0.0" rather
      * than "-0.0" for a negative value that rounds to zero.
      */
     public static String fixed(double value, int decimals) {

@@ -1,7 +1,9 @@
 package dev.dwellwise.thermal;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
 
+import java.math.BigDecimal;
 import java.util.Locale;
 import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
@@ -15,6 +17,17 @@ class DecimalTextTest {
     private static final double[] TIES_AND_EDGES = {0, 0.05, 0.15, 0.25, 0.45, 1.005, 2.675, 180.05, 179.95,
         -0.05, -0.15, -180.05, 0.00005, 0.00015, 1.0005, 99.995, 999.95, 1e-5, 1.25e-5, 123456.789, 0.1, 0.9999,
         9999.95, 12345.5, 1e14 + 0.5, 0.001900, 0.0019, 7.30236, 14.0};
+
+    @Test
+    void powersOfTenAreExactUpToTheLastExactDouble() {
+        // IEEE 754 binary64: 10^n = 2^n * 5^n is exact while 5^n fits the 53-bit significand, so up to
+        // 10^22 (5^22 < 2^53 < 5^23); BigDecimal's exact expansion of the double is the reference
+        for (int n = 0; n <= DecimalText.MAX_EXACT_POWER; n++) {
+            assertEquals(0, new BigDecimal(DecimalText.powerOfTen(n)).compareTo(BigDecimal.TEN.pow(n)), "10^" + n);
+        }
+        assertEquals(22, DecimalText.MAX_EXACT_POWER);
+        assertNotEquals(0, new BigDecimal(1e23).compareTo(BigDecimal.TEN.pow(23)), "10^23 is not a double");
+    }
 
     @Test
     void fixedMatchesTheFormatterOnTiesAndRandomValues() {
