@@ -23,27 +23,20 @@ import org.slf4j.LoggerFactory;
  * finish within the configured grace period, then stops.
  *
  * <p>Every request passes, in order: a request id, the security headers, CORS (which answers
- * OPTIONS itself), routing, the bearer token; the request logger writes the access line, records
+ * OPTIONS itself), routing, the bearer token; {@link AccessLog} writes the access line, records
  * the request's metrics and clears the id.
  */
 public final class App {
 
     private static final Logger LOG = LoggerFactory.getLogger(App.class);
-    private static final Logger ACCESS = LoggerFactory.getLogger("dwellwise.access");
-    /**
-     * Request attribute: what the access line adds about the request's solve. One line per request,
-     * written after the solve has given its worker back: a log write inside the worker's hold made
-     * the other solves wait behind the log's lock (measured: a third of the throughput under load).
-     */
-    static final String ACCESS_DETAIL = "dwellwise.accessDetail";
-
     private App() {
     }
 
     public static Javalin create(ServiceConfig config, Services services) {
         QueuedThreadPool httpThreads = HttpServerSettings.threadPool(config);
         ServiceMetrics metrics = new ServiceMetrics(httpThreads);
-        ProblemErrorHandler jettyErrors = new ProblemErrorHandler(services.mapper(), metrics);
+        AccessLog access = new AccessLog(metrics);
+        ProblemErrorHandler jettyErrors = new ProblemErrorHandler(services.mapper(), access);
         Problems problems = new Problems(services.mapper());
         AdmissionControl admission = new AdmissionControl(config.workerThreads(), config.queueSize(),
                 config.computeBudgetMillis(), metrics.registry());
@@ -65,24 +58,17 @@ public final class App {
             cfg.jetty.threadPool = httpThreads;
             cfg.jetty.modifyServer(server -> HttpServerSettings.configure(server, config, jettyErrors));
             cfg.jetty.modifyHttpConfiguration(HttpServerSettings::configure);
-            cfg.jetty.modifyServletContextHandler(context -> context.setErrorHandler(jettyErrors));
+            cfg.jetty.modifyServletContextHandler(context -> {
+                context.setErrorHandler(jettyErrors);
+                context.addEventListener(access);
+            });
             cfg.events.serverStopped(metrics::close);
             cfg.jsonMapper(new JavalinJackson(services.mapper(), false));
-            cfg.requestLogger.http((ctx, ms) -> {
-                try {
-                    String route = route(ctx);
-                    String detail = ctx.attribute(ACCESS_DETAIL);
-                    ACCESS.info("{} {} {} {}ms{}", ctx.method(), route == null ? ctx.path() : route, ctx.statusCode(),
-                            Math.round(ms), detail == null ? "" : " " + detail);
-                    metrics.recordRequest(ctx.method().name(), route == null ? ServiceMetrics.UNMATCHED : route,
-                            ctx.statusCode(), ms);
-                } finally {
-                    RequestIds.clear();
-                }
-            });
+            cfg.requestLogger.http(access::answered);
 
             cfg.routes.before(ctx -> {
                 RequestIds.assign(ctx);
+                access.begin(ctx);
                 SecurityHeaders.apply(ctx::header);
                 cors.apply(ctx);
                 if (ctx.method() == HandlerType.OPTIONS) {

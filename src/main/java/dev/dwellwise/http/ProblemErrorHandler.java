@@ -11,8 +11,6 @@ import org.eclipse.jetty.server.Request;
 import org.eclipse.jetty.server.Response;
 import org.eclipse.jetty.server.handler.ErrorHandler;
 import org.eclipse.jetty.util.Callback;
-import org.slf4j.Logger;
-import org.slf4j.LoggerFactory;
 
 /**
  * Jetty's answer to what never reaches the app (a malformed request line, oversize headers, a bad
@@ -22,14 +20,12 @@ import org.slf4j.LoggerFactory;
  */
 final class ProblemErrorHandler extends ErrorHandler {
 
-    private static final Logger ACCESS = LoggerFactory.getLogger("dwellwise.access");
-
     private final ObjectMapper mapper;
-    private final ServiceMetrics metrics;
+    private final AccessLog access;
 
-    ProblemErrorHandler(ObjectMapper mapper, ServiceMetrics metrics) {
+    ProblemErrorHandler(ObjectMapper mapper, AccessLog access) {
         this.mapper = mapper;
-        this.metrics = metrics;
+        this.access = access;
     }
 
     /** Errors on a request that Jetty parsed but the app never saw. */
@@ -45,7 +41,7 @@ final class ProblemErrorHandler extends ErrorHandler {
             // Jetty's own 503 comes from a stopping server: retry, and another replica will answer.
             headers.put(HttpHeader.RETRY_AFTER, Problems.RETRY_AFTER_SECONDS);
         }
-        logged(request.getMethod(), code, id);
+        access.rejected(request.getMethod(), code, id);
         response.write(true, ByteBuffer.wrap(body(code, id)), callback);
     }
 
@@ -56,13 +52,8 @@ final class ProblemErrorHandler extends ErrorHandler {
         fields.put(HttpHeader.CONTENT_TYPE, MediaTypes.PROBLEM_JSON);
         fields.put(RequestIds.HEADER, id);
         SecurityHeaders.apply(fields::put);
-        logged("-", status, id);
+        access.rejected("-", status, id);
         return ByteBuffer.wrap(body(status, id));
-    }
-
-    private void logged(String method, int status, String id) {
-        ACCESS.info("{} {} {} rejected by the HTTP layer [{}]", method, ServiceMetrics.UNMATCHED, status, id);
-        metrics.recordRequest(method, ServiceMetrics.UNMATCHED, status, 0);
     }
 
     private byte[] body(int status, String id) {

@@ -31,7 +31,7 @@ final class ReleaseRoutes {
         ctx.attribute(SimulationRoutes.JOB_PREFIX, JobValidator.RELEASE_JOB_PREFIX);
         ReleaseRequest request = bodies.read(SimulationRoutes.body(ctx, config), ReleaseRequest.class);
         ReleaseAnswer answer = solver.release(request);
-        ctx.attribute(App.ACCESS_DETAIL, Solver.accessDetail(answer));
+        ctx.attribute(AccessLog.DETAIL, Solver.accessDetail(answer));
         ctx.contentType(MediaTypes.JSON).result(services.mapper().writeValueAsBytes(answer));
     }
 }

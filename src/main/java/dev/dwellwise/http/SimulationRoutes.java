@@ -34,7 +34,7 @@ final class SimulationRoutes {
         String produce = negotiate(ctx, OFFERED);
         Job job = bodies.read(body(ctx, config), Job.class);
         SimulationResult result = solver.simulate(job, "");
-        ctx.attribute(App.ACCESS_DETAIL, Solver.accessDetail(result));
+        ctx.attribute(AccessLog.DETAIL, Solver.accessDetail(result));
         if (!MediaTypes.JSON.equals(produce) && result.series() == null) {
             throw new ApiException(ProblemType.NOT_ACCEPTABLE, produce + " renders the series, and the job "
                     + "set output.series to false");

@@ -3,7 +3,13 @@ package dev.dwellwise.http;
 import static org.hamcrest.Matchers.containsString;
 import static org.hamcrest.Matchers.startsWith;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.IOException;
+import java.io.OutputStream;
+import java.net.Socket;
+import java.nio.charset.StandardCharsets;
+import java.util.List;
 import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -12,9 +18,16 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
 
-@Timeout(20)
+/**
+ * {@code /metrics} counts what the service served. A request whose answer cannot be delivered is
+ * counted and logged too: Javalin skips its request loggers when writing the answer fails.
+ */
+@Timeout(30)
 class MetricsEndpointTest {
 
+    /** The panel with its series sampled twice a second: about 64 KB, twice Jetty's 32 KB buffer. */
+    private static final String LARGE_ANSWER = Workloads.PANEL.replace("\"output\": { \"series\": false }",
+            "\"output\": { \"series\": true, \"sampleSeconds\": 0.5 }");
     private static RunningService service;
 
     @BeforeAll
@@ -65,6 +78,52 @@ class MetricsEndpointTest {
                 .body(containsString("dwellwise_solves_active"))
                 .body(containsString("http_server_requests_seconds_bucket{method=\"GET\",route=\"/metrics\","
                         + "status=\"200\",le=\"0.001\"}"));
+    }
+
+    @Test
+    void theLargeAnswerIsLargerThanTheOutputBuffer() {
+        int size = Http.given(service).contentType("application/json").body(LARGE_ANSWER).post("/v1/simulations")
+                .then().statusCode(200).extract().asByteArray().length;
+        assertTrue(size > 32_768, "answer of " + size + " bytes");
+    }
+
+    @Test
+    void anAnswerTheClientWalkedAwayFromIsLoggedAndCounted() throws Exception {
+        String count = "http_server_requests_seconds_count{method=\"POST\",route=\"/v1/simulations\",status=\"499\"}";
+        double before = value(scrape(), count);
+        try (CapturedLog access = CapturedLog.of("dwellwise.access")) {
+            sendAndReset("walked-away-1");
+            String line = awaitLine(access, "walked-away-1");
+            assertTrue(line.matches("POST /v1/simulations 499 \\d+ms model=lumped steps=\\d+ evaluations=\\d+ "
+                    + "verdict=pass answer not delivered"), line);
+        }
+        assertEquals(before + 1, value(scrape(), count));
+    }
+
+    /** Sends the request, then resets the connection at once (linger 0) while the service solves. */
+    private static void sendAndReset(String id) throws IOException {
+        byte[] body = LARGE_ANSWER.getBytes(StandardCharsets.UTF_8);
+        String head = "POST /v1/simulations HTTP/1.1\r\nHost: 127.0.0.1\r\nContent-Type: application/json\r\n"
+                + "X-Request-Id: " + id + "\r\nContent-Length: " + body.length + "\r\n\r\n";
+        try (Socket socket = new Socket("127.0.0.1", service.port())) {
+            socket.setSoLinger(true, 0);
+            OutputStream out = socket.getOutputStream();
+            out.write(head.getBytes(StandardCharsets.US_ASCII));
+            out.write(body);
+            out.flush();
+        }
+    }
+
+    private static String awaitLine(CapturedLog access, String id) throws InterruptedException {
+        for (int i = 0; i < 200; i++) {
+            List<String> ids = access.requestIds();
+            int at = ids.indexOf(id);
+            if (at >= 0) {
+                return access.messages().get(at);
+            }
+            Thread.sleep(50);
+        }
+        throw new AssertionError("no access line for " + id + " within 10 s");
     }
 
     private static String scrape() {
