@@ -29,6 +29,7 @@ import org.slf4j.LoggerFactory;
 public final class App {
 
     private static final Logger LOG = LoggerFactory.getLogger(App.class);
+
     private App() {
     }
 
