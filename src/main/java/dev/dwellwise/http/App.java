@@ -54,6 +54,7 @@ public final class App {
             cfg.http.maxRequestSize = config.maxBodyBytes();
             cfg.http.defaultContentType = MediaTypes.JSON;
             cfg.http.prefer405over404 = true;
+            cfg.http.compressionStrategy = HttpServerSettings.compression();
             cfg.jetty.host = config.host();
             cfg.jetty.port = config.port();
             cfg.jetty.threadPool = httpThreads;

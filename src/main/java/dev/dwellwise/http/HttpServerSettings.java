@@ -1,11 +1,13 @@
 package dev.dwellwise.http;
 
+import io.javalin.compression.CompressionStrategy;
+import io.javalin.compression.Gzip;
 import org.eclipse.jetty.server.HttpConfiguration;
 import org.eclipse.jetty.server.Server;
 import org.eclipse.jetty.server.handler.GracefulHandler;
 import org.eclipse.jetty.util.thread.QueuedThreadPool;
 
-/** How Jetty is set up under Javalin: its thread pool, graceful stop, error pages and headers. */
+/** How Jetty is set up under Javalin: its thread pool, graceful stop, error pages, headers and compression. */
 final class HttpServerSettings {
 
     /** HTTP threads beyond the admitted solves: probes, scrapes, cheap routes, Jetty's own selectors. */
@@ -18,7 +20,26 @@ final class HttpServerSettings {
      */
     static final int POOL_STOP_MIN_MILLIS = 1_000;
 
+    /**
+     * Answers from this size on are gzipped for a client that accepts gzip: a series or a chart, not
+     * a summary or a problem. Measured in process on this service's answers: a 2.9 KB summary took
+     * 28 µs to gzip at level 1 (37 µs at level 6), about as long as its lumped solve, to save 1.6 KB,
+     * a fraction of a millisecond even on a 100 Mbit/s plant network. Javalin's own default is 1500 bytes.
+     */
+    static final int GZIP_FROM_BYTES = 16 * 1024;
+    /**
+     * Gzip's fastest level: on a 133 KB series, 1.3 ms to 43 KB against 5.9 ms to 40 KB at Javalin's
+     * default level 6; on a 35 KB series, 0.12 ms to 7.5 KB against 0.47 ms to 6.6 KB.
+     */
+    static final int GZIP_LEVEL = 1;
+
     private HttpServerSettings() {
+    }
+
+    static CompressionStrategy compression() {
+        CompressionStrategy gzip = new CompressionStrategy(null, new Gzip(GZIP_LEVEL));
+        gzip.setDefaultMinSizeForCompression(GZIP_FROM_BYTES);
+        return gzip;
     }
 
     /**

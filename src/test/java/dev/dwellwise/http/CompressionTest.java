@@ -1,0 +1,87 @@
+package dev.dwellwise.http;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.ByteArrayInputStream;
+import java.io.IOException;
+import java.net.URI;
+import java.net.http.HttpClient;
+import java.net.http.HttpRequest;
+import java.net.http.HttpResponse;
+import java.nio.charset.StandardCharsets;
+import java.time.Duration;
+import java.util.Map;
+import java.util.Optional;
+import java.util.zip.GZIPInputStream;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.Timeout;
+
+/**
+ * Gzip only where it pays: a series for a client that accepts gzip, never a summary (see
+ * {@link HttpServerSettings#GZIP_FROM_BYTES}). The JDK's client is used because it does not
+ * decompress by itself, so the test sees what went over the wire.
+ */
+@Timeout(30)
+class CompressionTest {
+
+    /** The panel with its series sampled every second: about 35 KB of JSON. */
+    private static final String SERIES = Workloads.PANEL.replace("\"output\": { \"series\": false }",
+            "\"output\": { \"series\": true, \"sampleSeconds\": 1 }");
+    private static final HttpClient CLIENT = HttpClient.newBuilder().version(HttpClient.Version.HTTP_1_1)
+            .connectTimeout(Duration.ofMillis(Http.TIMEOUT_MILLIS)).build();
+    private static RunningService service;
+
+    @BeforeAll
+    static void start() {
+        service = RunningService.start(Map.of());
+    }
+
+    @AfterAll
+    static void stop() {
+        service.close();
+    }
+
+    @Test
+    void aSummaryGoesPlainEvenToAClientThatAcceptsGzip() throws Exception {
+        HttpResponse<byte[]> answer = post(Workloads.PANEL, "gzip");
+        assertEquals(200, answer.statusCode());
+        assertEquals(Optional.empty(), answer.headers().firstValue("Content-Encoding"));
+        assertTrue(answer.body().length < HttpServerSettings.GZIP_FROM_BYTES, answer.body().length + " bytes");
+        assertTrue(new String(answer.body(), StandardCharsets.UTF_8).startsWith("{\"verdict\""));
+    }
+
+    @Test
+    void aSeriesIsGzippedForAClientThatAcceptsItAndUnpacksToThePlainAnswer() throws Exception {
+        HttpResponse<byte[]> plain = post(SERIES, null);
+        HttpResponse<byte[]> packed = post(SERIES, "gzip, deflate");
+        assertEquals(200, plain.statusCode());
+        assertEquals(200, packed.statusCode());
+        assertTrue(plain.body().length > 2 * HttpServerSettings.GZIP_FROM_BYTES, plain.body().length + " bytes");
+        assertEquals(Optional.empty(), plain.headers().firstValue("Content-Encoding"));
+        assertEquals(Optional.of("gzip"), packed.headers().firstValue("Content-Encoding"));
+        assertArrayEquals(plain.body(), gunzip(packed.body()));
+        // columns of numbers compress well even at the fastest level (measured: to about a fifth)
+        assertTrue(packed.body().length < plain.body().length / 3, packed.body().length + " bytes");
+    }
+
+    private static HttpResponse<byte[]> post(String job, String acceptEncoding) throws IOException, InterruptedException {
+        HttpRequest.Builder request = HttpRequest.newBuilder(URI.create(service.url("/v1/simulations")))
+                .timeout(Duration.ofMillis(Http.TIMEOUT_MILLIS))
+                .header("Content-Type", "application/json")
+                .POST(HttpRequest.BodyPublishers.ofString(job));
+        if (acceptEncoding != null) {
+            request.header("Accept-Encoding", acceptEncoding);
+        }
+        return CLIENT.send(request.build(), HttpResponse.BodyHandlers.ofByteArray());
+    }
+
+    private static byte[] gunzip(byte[] packed) throws IOException {
+        try (GZIPInputStream in = new GZIPInputStream(new ByteArrayInputStream(packed))) {
+            return in.readAllBytes();
+        }
+    }
+}
