@@ -10,7 +10,7 @@ package dev.dwellwise.job;
  * @param surroundingsTemperatureC     radiant surroundings, °C (default: the air's, ramping with it)
  * @param surroundingsEndTemperatureC  surroundings at the end of a ramp (with surroundingsTemperatureC)
  * @param until                        the end condition (required)
- * @param maxSeconds                   the longest the stage may last (default 86,400 s)
+ * @param maxSeconds                   the longest the stage may last (default 86,400 s, or a timed stage's own seconds where longer)
  */
 public record Stage(String name, Double airTemperatureC, Double airEndTemperatureC, Double convectionWPerM2K,
                     Double surroundingsTemperatureC, Double surroundingsEndTemperatureC, Until until,

@@ -7,10 +7,11 @@ package dev.dwellwise.thermal;
  * caller waits, which the work limits alone do not (a stiff job can spend seconds inside them, and
  * a loaded machine makes every step slower).
  *
- * @param maxSteps       accepted steps over the whole history
- * @param maxEvaluations right-hand-side evaluations (lumped) or linear solves (slab) over the whole history
+ * @param maxSteps       accepted steps over one model run's whole history
+ * @param maxEvaluations right-hand-side evaluations (lumped) or linear solves (slab) over one model run
  * @param maxSamples     output samples over the whole history
- * @param maxMillis      wall-clock milliseconds for one model's run through the stages
+ * @param maxMillis      wall-clock milliseconds for one solve, all its model runs together (an
+ *                       {@code auto} job's lumped trial and its slab solve share one deadline)
  */
 public record ComputeBudget(long maxSteps, long maxEvaluations, int maxSamples, long maxMillis) {
 

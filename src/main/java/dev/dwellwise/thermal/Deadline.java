@@ -2,10 +2,12 @@ package dev.dwellwise.thermal;
 
 /**
  * The wall-clock end of one solve: {@link ComputeBudget#maxMillis()} from the moment it is made.
+ * Every model run of the solve shares it ({@link ModelSelector}: an {@code auto} job's lumped
+ * trial and its slab solve), so the caller waits at most the budget, not once per model.
  * {@link StageRunner} checks it between segments; a back end that integrates a long window in one
  * call checks it at every step of the window too, so a stiff job stops on time.
  */
-final class Deadline {
+public final class Deadline {
 
     private final long maxMillis;
     private final long endNanos;
@@ -15,7 +17,7 @@ final class Deadline {
         this.endNanos = System.nanoTime() + maxMillis * 1_000_000;
     }
 
-    static Deadline startingNow(ComputeBudget budget) {
+    public static Deadline startingNow(ComputeBudget budget) {
         return new Deadline(budget.maxMillis());
     }
 

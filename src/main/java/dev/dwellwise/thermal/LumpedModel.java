@@ -49,7 +49,7 @@ public final class LumpedModel implements ThermalModel {
     }
 
     @Override
-    public Stepper newStepper(ThermalPart part, ComputeBudget budget) {
-        return new LumpedStepper(part, budget);
+    public Stepper newStepper(ThermalPart part, ComputeBudget budget, Deadline deadline) {
+        return new LumpedStepper(part, budget, deadline);
     }
 }

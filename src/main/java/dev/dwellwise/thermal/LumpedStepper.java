@@ -21,10 +21,10 @@ final class LumpedStepper implements Stepper {
     private double temperatureK;
     private long steps;
     private Segment last;
-    LumpedStepper(ThermalPart part, ComputeBudget budget) {
+    LumpedStepper(ThermalPart part, ComputeBudget budget, Deadline deadline) {
         this.part = part;
         this.budget = budget;
-        this.deadline = Deadline.startingNow(budget);
+        this.deadline = deadline;
         this.faces = part.exposedFaces();
         int layers = part.layers().size();
         PropertyCurve[] specificHeats = new PropertyCurve[layers];

@@ -6,7 +6,8 @@ import java.util.Comparator;
  * Chooses the back end for a problem. {@code auto} first solves the lumped model (cheap) and keeps
  * it where every stage's Biot number, radiation included, is below {@link #BIOT_LIMIT}; otherwise
  * it solves the slab model. A forced {@code lumped} on a part beyond that limit still runs, and the
- * slab model is solved beside it to say how far apart the surface and core really are.
+ * slab model is solved beside it to say how far apart the surface and core really are. The runs of
+ * one selection share one wall-clock deadline.
  */
 public final class ModelSelector {
 
@@ -42,28 +43,29 @@ public final class ModelSelector {
     }
 
     public Selection solve(ThermalProblem problem, String requested) {
+        Deadline deadline = Deadline.startingNow(problem.budget());
         switch (requested) {
             case "lumped" -> {
-                ThermalHistory history = StageRunner.run(problem, lumped);
+                ThermalHistory history = StageRunner.run(problem, lumped, deadline);
                 double bi = history.largestBiotNumber();
                 boolean beyond = bi >= BIOT_LIMIT;
-                double spread = beyond ? StageRunner.run(problem, slab).largestSpreadK() : Double.NaN;
+                double spread = beyond ? StageRunner.run(problem, slab, deadline).largestSpreadK() : Double.NaN;
                 return new Selection(history, lumped, requested, "lumped model requested; " + decided(history)
                         + (beyond ? " >= " : " < ") + BIOT_LIMIT, beyond, spread);
             }
             case "slab" -> {
-                ThermalHistory history = StageRunner.run(problem, slab);
+                ThermalHistory history = StageRunner.run(problem, slab, deadline);
                 return new Selection(history, slab, requested, "slab conduction model requested", false,
                         history.largestSpreadK());
             }
             default -> {
-                ThermalHistory history = StageRunner.run(problem, lumped);
+                ThermalHistory history = StageRunner.run(problem, lumped, deadline);
                 double bi = history.largestBiotNumber();
                 if (bi < BIOT_LIMIT) {
                     return new Selection(history, lumped, requested, decided(history) + " < " + BIOT_LIMIT, false,
                             Double.NaN);
                 }
-                ThermalHistory slabHistory = StageRunner.run(problem, slab);
+                ThermalHistory slabHistory = StageRunner.run(problem, slab, deadline);
                 // the number that decided comes from the lumped trial; the stages report the slab's own
                 return new Selection(slabHistory, slab, requested, "lumped trial: " + decided(history) + " >= "
                         + BIOT_LIMIT + ": through-thickness conduction", false, slabHistory.largestSpreadK());

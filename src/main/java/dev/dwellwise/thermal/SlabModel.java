@@ -69,7 +69,8 @@ public final class SlabModel implements ThermalModel {
     }
 
     @Override
-    public Stepper newStepper(ThermalPart part, ComputeBudget budget) {
+    public Stepper newStepper(ThermalPart part, ComputeBudget budget, Deadline deadline) {
+        // the slab's calls are short (one accepted step each); StageRunner checks the deadline between them
         return new SlabStepper(part, SlabGrid.of(part, resolution.cells()), resolution.relativeTolerance(), budget);
     }
 }

@@ -29,20 +29,25 @@ public final class StageRunner {
     private double largestRate = 0;
     private double peakK;
 
-    private StageRunner(ThermalProblem problem, Stepper stepper) {
+    private StageRunner(ThermalProblem problem, Stepper stepper, Deadline deadline) {
         this.problem = problem;
         this.stepper = stepper;
         this.series = new SampledSeries(problem.budget().maxSamples());
         this.pendingProfiles = new ArrayList<>(problem.profileTimes());
         this.pendingProfiles.sort(Double::compare);
         this.peakK = problem.part().initialK();
-        this.deadline = Deadline.startingNow(problem.budget());
+        this.deadline = deadline;
     }
 
-    /** Computes the history of the problem with the model. */
+    /** Computes the history of the problem with the model, as a whole solve of its own. */
     public static ThermalHistory run(ThermalProblem problem, ThermalModel model) {
-        Stepper stepper = model.newStepper(problem.part(), problem.budget());
-        return new StageRunner(problem, stepper).runAll(model.name());
+        return run(problem, model, Deadline.startingNow(problem.budget()));
+    }
+
+    /** Computes the history of the problem with the model, as one run of a solve that ends at {@code deadline}. */
+    static ThermalHistory run(ThermalProblem problem, ThermalModel model, Deadline deadline) {
+        Stepper stepper = model.newStepper(problem.part(), problem.budget(), deadline);
+        return new StageRunner(problem, stepper, deadline).runAll(model.name());
     }
 
     private ThermalHistory runAll(String modelName) {

@@ -12,6 +12,14 @@ public interface ThermalModel {
     /** The relative tolerance of its error control. */
     double tolerance();
 
-    /** A fresh stepper for one solve of the part, starting at time 0 from its initial temperature. */
-    Stepper newStepper(ThermalPart part, ComputeBudget budget);
+    /**
+     * A fresh stepper for one run of the part, starting at time 0 from its initial temperature, that
+     * stops with the TIME limit once the solve's {@code deadline} has passed.
+     */
+    Stepper newStepper(ThermalPart part, ComputeBudget budget, Deadline deadline);
+
+    /** As above, for a run that is a whole solve: the budget's wall clock starts now. */
+    default Stepper newStepper(ThermalPart part, ComputeBudget budget) {
+        return newStepper(part, budget, Deadline.startingNow(budget));
+    }
 }

@@ -4,12 +4,10 @@ import dev.dwellwise.cure.CureBudget;
 import dev.dwellwise.job.JobLimits;
 import dev.dwellwise.report.Simulator;
 import dev.dwellwise.thermal.ComputeBudget;
+import dev.dwellwise.thermal.HookedModel;
 import dev.dwellwise.thermal.LumpedModel;
 import dev.dwellwise.thermal.ModelSelector;
 import dev.dwellwise.thermal.SlabModel;
-import dev.dwellwise.thermal.Stepper;
-import dev.dwellwise.thermal.ThermalModel;
-import dev.dwellwise.thermal.ThermalPart;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 
@@ -32,7 +30,7 @@ public final class SolveGate {
     /** The bundled services with a lumped model that waits at this gate. */
     public Services services(ServiceConfig config) {
         Services bundled = Services.bundled(config);
-        ModelSelector selector = new ModelSelector(new HeldModel(new LumpedModel()), new SlabModel());
+        ModelSelector selector = new ModelSelector(new HookedModel(new LumpedModel(), this::hold), new SlabModel());
         Simulator simulator = new Simulator(bundled.materials(), selector, JobLimits.standard(),
                 ComputeBudget.standard().withMaxMillis(config.computeBudgetMillis()), CureBudget.standard(),
                 "dwellwise test");
@@ -49,40 +47,16 @@ public final class SolveGate {
         open.countDown();
     }
 
-    private final class HeldModel implements ThermalModel {
-        private final ThermalModel model;
-
-        HeldModel(ThermalModel model) {
-            this.model = model;
-        }
-
-        @Override
-        public String name() {
-            return model.name();
-        }
-
-        @Override
-        public String method() {
-            return model.method();
-        }
-
-        @Override
-        public double tolerance() {
-            return model.tolerance();
-        }
-
-        @Override
-        public Stepper newStepper(ThermalPart part, ComputeBudget budget) {
-            entered.countDown();
-            try {
-                if (!open.await(MAX_HOLD_SECONDS, TimeUnit.SECONDS)) {
-                    throw new IllegalStateException("the test never opened the gate");
-                }
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                throw new IllegalStateException("interrupted at the gate", e);
+    /** Counts a solve in, then waits for the gate (bounded). */
+    private void hold() {
+        entered.countDown();
+        try {
+            if (!open.await(MAX_HOLD_SECONDS, TimeUnit.SECONDS)) {
+                throw new IllegalStateException("the test never opened the gate");
             }
-            return model.newStepper(part, budget);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted at the gate", e);
         }
     }
 }

@@ -56,8 +56,8 @@ class StageSemanticsTest {
             }
 
             @Override
-            public Stepper newStepper(ThermalPart thermalPart, ComputeBudget budget) {
-                Stepper inner = new LumpedModel().newStepper(thermalPart, budget);
+            public Stepper newStepper(ThermalPart thermalPart, ComputeBudget budget, Deadline deadline) {
+                Stepper inner = new LumpedModel().newStepper(thermalPart, budget, deadline);
                 return new Stepper() {
                     public void enterStage(StageConditions stage) {
                         inner.enterStage(stage);

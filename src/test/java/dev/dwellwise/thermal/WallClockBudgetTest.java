@@ -6,7 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
-/** The wall-clock part of {@link ComputeBudget}: a run past its deadline stops with the TIME limit. */
+/**
+ * The wall-clock part of {@link ComputeBudget}: a run past its deadline stops with the TIME limit,
+ * and the model runs of one solve share one deadline.
+ */
 class WallClockBudgetTest {
 
     private static ThermalProblem heating(ComputeBudget budget) {
@@ -43,5 +46,35 @@ class WallClockBudgetTest {
     void aBudgetBeyondADayIsRefused() {
         assertThrows(IllegalArgumentException.class,
                 () -> ComputeBudget.standard().withMaxMillis(ComputeBudget.LONGEST_MAX_MILLIS + 1));
+    }
+
+    /** A thick block in a hot, fast oven: Bi about 1, so {@code auto} falls back to the slab model. */
+    private static ThermalProblem thickBlock(ComputeBudget budget) {
+        ThermalPart part = Parts.plate(Parts.steel1010(), 0.2, 2, 0.9, 20);
+        StageConditions soak = Parts.stage("soak", 600, 600, 500, new EndCondition.AfterDuration(600), 600);
+        return new ThermalProblem(part, List.of(soak), 60, budget, List.of());
+    }
+
+    @Test
+    void theLumpedTrialAndTheSlabSolveOfOneSelectionShareOneDeadline() {
+        // each model takes 200 ms before its first step: 400 ms in all against a 300 ms budget, which
+        // either run alone would keep
+        ModelSelector slow = new ModelSelector(slowToStart(new LumpedModel()), slowToStart(new SlabModel()));
+        ComputeLimitExceededException e = assertThrows(ComputeLimitExceededException.class,
+                () -> slow.solve(thickBlock(ComputeBudget.standard().withMaxMillis(300)), "auto"));
+        assertEquals(ComputeLimitExceededException.Limit.TIME, e.limit());
+        assertEquals("slab", slow.solve(thickBlock(ComputeBudget.standard()), "auto").model().name());
+    }
+
+    /** A model that takes 200 ms before each run's first step, as a cold or loaded machine might. */
+    private static ThermalModel slowToStart(ThermalModel model) {
+        return new HookedModel(model, () -> {
+            try {
+                Thread.sleep(200);
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IllegalStateException(e);
+            }
+        });
     }
 }
