@@ -19,7 +19,10 @@ import org.slf4j.MDC;
  * over, writes the line of such a request instead. Its status is 499, what Javalin and common
  * practice give a client that closed the connection: the status line may have gone out as 200
  * before the body failed, but the answer did not arrive. Writing bytes already in memory fails
- * only on the connection, so that is the one cause.
+ * only on the connection, so that is the one cause. Only an answer larger than Jetty's output
+ * buffer (32 KiB, as sent) fails inside the copy: a smaller one is sent after the loggers have run.
+ * The listener runs at the end of every dispatch, so an asynchronous route (none today) would need
+ * its line kept back until its last dispatch.
  */
 final class AccessLog implements ServletRequestListener {
 

@@ -35,11 +35,9 @@ final class Rounding {
             return value;
         }
         int decimals = 5 - (int) Math.floor(Math.log10(Math.abs(value)));
-        if (decimals >= 0 && decimals <= DecimalText.MAX_EXACT_POWER) {
-            return Math.rint(value * DecimalText.powerOfTen(decimals)) / DecimalText.powerOfTen(decimals);
-        }
-        if (decimals < 0 && -decimals <= DecimalText.MAX_EXACT_POWER) {
-            return Math.rint(value / DecimalText.powerOfTen(-decimals)) * DecimalText.powerOfTen(-decimals);
+        if (Math.abs(decimals) <= DecimalText.MAX_EXACT_POWER) {
+            double scale = DecimalText.powerOfTen(Math.abs(decimals));
+            return decimals >= 0 ? Math.rint(value * scale) / scale : Math.rint(value / scale) * scale;
         }
         return new BigDecimal(value).round(new MathContext(6, RoundingMode.HALF_EVEN)).doubleValue();
     }

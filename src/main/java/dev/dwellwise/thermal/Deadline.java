@@ -17,7 +17,7 @@ public final class Deadline {
         this.endNanos = System.nanoTime() + maxMillis * 1_000_000;
     }
 
-    public static Deadline startingNow(ComputeBudget budget) {
+    static Deadline startingNow(ComputeBudget budget) {
         return new Deadline(budget.maxMillis());
     }
 

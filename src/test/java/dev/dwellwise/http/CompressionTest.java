@@ -21,7 +21,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
 
 /**
- * Gzip only where it pays: a series for a client that accepts gzip, never a summary (see
+ * Gzip only where it pays: a series or a chart for a client that accepts gzip, not a summary (see
  * {@link HttpServerSettings#GZIP_FROM_BYTES}). The JDK's client is used because it does not
  * decompress by itself, so the test sees what went over the wire.
  */
@@ -29,8 +29,7 @@ import org.junit.jupiter.api.Timeout;
 class CompressionTest {
 
     /** The panel with its series sampled every second: about 35 KB of JSON. */
-    private static final String SERIES = Workloads.PANEL.replace("\"output\": { \"series\": false }",
-            "\"output\": { \"series\": true, \"sampleSeconds\": 1 }");
+    private static final String SERIES = seriesEvery(1);
     private static final HttpClient CLIENT = HttpClient.newBuilder().version(HttpClient.Version.HTTP_1_1)
             .connectTimeout(Duration.ofMillis(Http.TIMEOUT_MILLIS)).build();
     private static RunningService service;
@@ -68,10 +67,49 @@ class CompressionTest {
         assertTrue(packed.body().length < plain.body().length / 3, packed.body().length + " bytes");
     }
 
+    @Test
+    void theThresholdFallsAtSixteenKibibytesOfAnswer() throws Exception {
+        // series answers on both sides of the threshold, within a factor of two of it
+        boolean below = false;
+        boolean above = false;
+        for (double sampleSeconds : new double[] {1.6, 2.0, 2.2, 2.4, 2.8, 3.5, 4.5}) {
+            String job = seriesEvery(sampleSeconds);
+            int size = post(job, null).body().length;
+            boolean packed = post(job, "gzip").headers().firstValue("Content-Encoding").isPresent();
+            assertEquals(size >= HttpServerSettings.GZIP_FROM_BYTES, packed, size + " bytes");
+            below |= !packed && size >= HttpServerSettings.GZIP_FROM_BYTES / 2;
+            above |= packed && size < 2 * HttpServerSettings.GZIP_FROM_BYTES;
+        }
+        assertTrue(below && above, "answers on both sides of the threshold");
+    }
+
+    @Test
+    void aLargeCsvSeriesAndAnSvgChartAreGzippedToo() throws Exception {
+        for (String type : new String[] {"text/csv", "image/svg+xml"}) {
+            HttpResponse<byte[]> plain = post(seriesEvery(0.25), null, type);
+            HttpResponse<byte[]> packed = post(seriesEvery(0.25), "gzip", type);
+            assertEquals(200, packed.statusCode(), type);
+            assertTrue(plain.body().length >= HttpServerSettings.GZIP_FROM_BYTES, type + ": " + plain.body().length);
+            assertEquals(Optional.of("gzip"), packed.headers().firstValue("Content-Encoding"), type);
+            assertArrayEquals(plain.body(), gunzip(packed.body()), type);
+        }
+    }
+
+    private static String seriesEvery(double sampleSeconds) {
+        return Workloads.PANEL.replace("\"output\": { \"series\": false }",
+                "\"output\": { \"series\": true, \"sampleSeconds\": " + sampleSeconds + " }");
+    }
+
     private static HttpResponse<byte[]> post(String job, String acceptEncoding) throws IOException, InterruptedException {
+        return post(job, acceptEncoding, "application/json");
+    }
+
+    private static HttpResponse<byte[]> post(String job, String acceptEncoding, String accept)
+            throws IOException, InterruptedException {
         HttpRequest.Builder request = HttpRequest.newBuilder(URI.create(service.url("/v1/simulations")))
                 .timeout(Duration.ofMillis(Http.TIMEOUT_MILLIS))
                 .header("Content-Type", "application/json")
+                .header("Accept", accept)
                 .POST(HttpRequest.BodyPublishers.ofString(job));
         if (acceptEncoding != null) {
             request.header("Accept-Encoding", acceptEncoding);

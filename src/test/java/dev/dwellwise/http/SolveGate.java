@@ -14,7 +14,9 @@ import java.util.concurrent.TimeUnit;
 /**
  * Holds solves inside the solver until released, so a test can have requests in flight for as
  * long as it needs without sleeping: each solve counts itself in, then waits for the gate to open.
- * The wait is bounded, so a test that forgets to open the gate fails instead of hanging.
+ * The wait is bounded, so a test that forgets to open the gate fails instead of hanging. The hold
+ * is inside the solve, after its wall-clock deadline has started, so it counts against the compute
+ * budget: hold for less than the budget, or expect the TIME limit.
  */
 public final class SolveGate {
 

@@ -2,6 +2,7 @@ package dev.dwellwise.thermal;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -28,8 +29,10 @@ class WallClockBudgetTest {
 
     @Test
     void theLumpedStepperStopsInsideAWindowWithoutWaitingForItsEnd() {
-        ThermalProblem problem = heating(ComputeBudget.standard().withMaxMillis(0));
-        Stepper stepper = new LumpedModel().newStepper(problem.part(), problem.budget());
+        // the solve's deadline, not one of the stepper's own from the (ample) budget
+        ThermalProblem problem = heating(ComputeBudget.standard());
+        Stepper stepper = new LumpedModel().newStepper(problem.part(), problem.budget(),
+                Deadline.startingNow(ComputeBudget.standard().withMaxMillis(0)));
         stepper.enterStage(problem.stages().get(0));
         ComputeLimitExceededException e = assertThrows(ComputeLimitExceededException.class,
                 () -> stepper.advance(3600));
@@ -64,6 +67,15 @@ class WallClockBudgetTest {
                 () -> slow.solve(thickBlock(ComputeBudget.standard().withMaxMillis(300)), "auto"));
         assertEquals(ComputeLimitExceededException.Limit.TIME, e.limit());
         assertEquals("slab", slow.solve(thickBlock(ComputeBudget.standard()), "auto").model().name());
+    }
+
+    @Test
+    void aForcedLumpedSolveAndItsSlabComparisonShareOneDeadline() {
+        ModelSelector slow = new ModelSelector(slowToStart(new LumpedModel()), slowToStart(new SlabModel()));
+        ComputeLimitExceededException e = assertThrows(ComputeLimitExceededException.class,
+                () -> slow.solve(thickBlock(ComputeBudget.standard().withMaxMillis(300)), "lumped"));
+        assertEquals(ComputeLimitExceededException.Limit.TIME, e.limit());
+        assertTrue(slow.solve(thickBlock(ComputeBudget.standard()), "lumped").lumpedBeyondValidity());
     }
 
     /** A model that takes 200 ms before each run's first step, as a cold or loaded machine might. */
