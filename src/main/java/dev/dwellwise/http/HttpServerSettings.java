@@ -23,9 +23,10 @@ final class HttpServerSettings {
 
     /**
      * Answers from this size on are gzipped for a client that accepts gzip: in practice a series (JSON
-     * or CSV) or a chart, not a summary or a short problem. Measured in process on this service's answers: a 2.9 KB summary took
-     * 28 µs to gzip at level 1 (37 µs at level 6), about as long as its lumped solve, to save 1.6 KB,
-     * a fraction of a millisecond even on a 100 Mbit/s plant network. Javalin's own default is 1500 bytes.
+     * or CSV) or a chart, not a summary or a short problem. Measured in process on this service's
+     * answers: a 2.9 KB summary took 28 µs to gzip at level 1 (37 µs at level 6), about as long as its
+     * lumped solve, to save 1.6 KB, a fraction of a millisecond even on a 100 Mbit/s plant network.
+     * Javalin's own default is 1500 bytes.
      */
     static final int GZIP_FROM_BYTES = 16 * 1024;
     /**

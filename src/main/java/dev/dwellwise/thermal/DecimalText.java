@@ -31,8 +31,8 @@ public final class DecimalText {
     }
 
     /**
-     * {@code decimals} places, half away from zero, like {@code %.Nf} (0 to {@link #MAX_EXACT_POWER} places); "0.0" rather
-     * than "-0.0" for a negative value that rounds to zero.
+     * {@code decimals} places, half away from zero, like {@code %.Nf} (0 to {@link #MAX_EXACT_POWER}
+     * places); "0.0" rather than "-0.0" for a negative value that rounds to zero.
      */
     public static String fixed(double value, int decimals) {
         double scale = SCALE[decimals];

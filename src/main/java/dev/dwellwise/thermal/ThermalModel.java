@@ -18,7 +18,10 @@ public interface ThermalModel {
      */
     Stepper newStepper(ThermalPart part, ComputeBudget budget, Deadline deadline);
 
-    /** As above, for a run that is a whole solve: the budget's wall clock starts now. */
+    /**
+     * As above, for a run that is a whole solve: the budget's wall clock starts now. A wrapper
+     * overrides the three-argument form and passes the deadline on.
+     */
     default Stepper newStepper(ThermalPart part, ComputeBudget budget) {
         return newStepper(part, budget, Deadline.startingNow(budget));
     }

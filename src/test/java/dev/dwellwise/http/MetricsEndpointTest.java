@@ -104,7 +104,7 @@ class MetricsEndpointTest {
                 out.flush();
                 assertTrue(gate.awaitEntered(), "the solve started");
             } finally {
-                gate.open();
+                gate.open(); // after the resource's close(): the reset reaches the service first
             }
             String line = awaitLine(access, "walked-away-1");
             assertTrue(line.matches("POST /v1/simulations 499 \\d+ms model=lumped steps=\\d+ evaluations=\\d+ "
