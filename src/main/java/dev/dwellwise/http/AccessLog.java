@@ -1,30 +1,27 @@
 package dev.dwellwise.http;
 
 import io.javalin.http.Context;
-import jakarta.servlet.ServletRequest;
-import jakarta.servlet.ServletRequestEvent;
-import jakarta.servlet.ServletRequestListener;
-import org.eclipse.jetty.ee10.servlet.ServletContextRequest;
+import org.eclipse.jetty.http.HttpFields;
+import org.eclipse.jetty.server.Request;
+import org.eclipse.jetty.server.handler.EventsHandler;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import org.slf4j.MDC;
 
 /**
- * One access line and one {@code http_server_requests} record per request, and the request id out
- * of the logging context afterwards, whichever way the request ends.
+ * One access line and one {@code http_server_requests} record per request that reached the app,
+ * written when Jetty has completed the request, so that the line says whether the answer arrived.
+ * The app's part (route, status, what the solve adds) is taken on the serving thread: from
+ * Javalin's request logger ({@link #answered}), or, where Javalin skipped it because copying the
+ * answer failed, once the dispatch is over. An answer whose sending failed, a client that closed the
+ * connection or timed out while it was being sent, is logged and counted with status 499 and
+ * {@code answer not delivered}, what Javalin and common practice give a client that went away:
+ * its status line may have gone out as 200, but the answer did not arrive.
  *
- * <p>Normally Javalin's request logger calls {@link #answered} once the answer is in Jetty's hands.
- * Javalin skips its request loggers when writing the answer fails (the client went away while a
- * large series was being sent), so the servlet listener, which Jetty calls when the dispatch is
- * over, writes the line of such a request instead. Its status is 499, what Javalin and common
- * practice give a client that closed the connection: the status line may have gone out as 200
- * before the body failed, but the answer did not arrive. Writing bytes already in memory fails
- * only on the connection, so that is the one cause. Only an answer larger than Jetty's output
- * buffer (32 KiB, as sent) fails inside the copy: a smaller one is sent after the loggers have run.
- * The listener runs at the end of every dispatch, so an asynchronous route (none today) would need
- * its line kept back until its last dispatch.
+ * <p>A Jetty handler wrapping the server's handlers. It also takes the request id out of the
+ * serving thread's logging context when the dispatch is over, whichever way it ended.
  */
-final class AccessLog implements ServletRequestListener {
+final class AccessLog extends EventsHandler {
 
     private static final Logger ACCESS = LoggerFactory.getLogger("dwellwise.access");
     /**
@@ -33,11 +30,10 @@ final class AccessLog implements ServletRequestListener {
      * the other solves wait behind the log's lock (measured: a third of the throughput under load).
      */
     static final String DETAIL = "dwellwise.accessDetail";
-    /** Request attribute: the request's context while its line is still to be written. */
-    private static final String PENDING = "dwellwise.accessPending";
-
-    /** The status of an answer that did not arrive: the client closed the connection (common practice). */
+    /** The status of an answer that did not arrive: the client went away (common practice). */
     static final int NOT_DELIVERED = 499;
+    /** Request attribute: this request's {@link Entry}. */
+    private static final String ENTRY = "dwellwise.accessEntry";
 
     private final ServiceMetrics metrics;
 
@@ -45,54 +41,88 @@ final class AccessLog implements ServletRequestListener {
         this.metrics = metrics;
     }
 
+    /** What the line says about the app's handling; filled on the serving thread. */
+    private static final class Entry {
+        private Context ctx;
+        private boolean taken;
+        private String method;
+        private String route;
+        private String path;
+        private int status;
+        private String detail;
+        private String requestId;
+
+        void take(Context context) {
+            taken = true;
+            method = context.method().name();
+            route = App.route(context);
+            path = context.path();
+            status = context.statusCode();
+            detail = context.attribute(DETAIL);
+            requestId = context.attribute(RequestIds.ATTRIBUTE);
+        }
+    }
+
+    @Override
+    protected void onBeforeHandling(Request request) {
+        request.setAttribute(ENTRY, new Entry());
+    }
+
     /** At the start of the app's handling (after the request id is assigned). */
     void begin(Context ctx) {
-        ctx.attribute(PENDING, ctx);
+        if (ctx.attribute(ENTRY) instanceof Entry entry) {
+            entry.ctx = ctx;
+        }
     }
 
     /** Javalin's request logger: the answer has been handed to Jetty. */
     void answered(Context ctx, float millis) {
-        ctx.attribute(PENDING, null);
-        try {
-            write(ctx, ctx.statusCode(), millis, "");
-        } finally {
-            RequestIds.clear();
+        if (ctx.attribute(ENTRY) instanceof Entry entry) {
+            entry.take(ctx);
         }
     }
 
-    /** Jetty's end of the dispatch: writes the line that {@link #answered} did not get to write. */
     @Override
-    public void requestDestroyed(ServletRequestEvent event) {
-        ServletRequest request = event.getServletRequest();
-        if (!(request.getAttribute(PENDING) instanceof Context ctx)) {
-            return;
+    protected void onAfterHandling(Request request, boolean handled, Throwable failure) {
+        // the serving thread, the dispatch over: Javalin's logger may have been skipped
+        if (request.getAttribute(ENTRY) instanceof Entry entry && entry.ctx != null && !entry.taken) {
+            entry.take(entry.ctx);
+            entry.status = NOT_DELIVERED;
         }
-        request.removeAttribute(PENDING);
-        String id = ctx.attribute(RequestIds.ATTRIBUTE);
-        if (id != null) {
-            MDC.put(RequestIds.MDC_KEY, id);
+        RequestIds.clear();
+    }
+
+    @Override
+    protected void onComplete(Request request, int status, HttpFields headers, Throwable failure) {
+        if (!(request.getAttribute(ENTRY) instanceof Entry entry) || !entry.taken) {
+            return; // refused before the app saw it: ProblemErrorHandler wrote its line
+        }
+        boolean delivered = failure == null && entry.status != NOT_DELIVERED;
+        int logged = delivered ? entry.status : NOT_DELIVERED;
+        double millis = (System.nanoTime() - request.getBeginNanoTime()) / 1e6;
+        // may run on another thread than the one that served the request
+        String previous = MDC.get(RequestIds.MDC_KEY);
+        if (entry.requestId != null) {
+            MDC.put(RequestIds.MDC_KEY, entry.requestId);
         }
         try {
-            ServletContextRequest base = ServletContextRequest.getServletContextRequest(request);
-            float millis = base == null ? 0 : (System.nanoTime() - base.getBeginNanoTime()) / 1e6f;
-            write(ctx, NOT_DELIVERED, millis, " answer not delivered");
+            ACCESS.info("{} {} {} {}ms{}{}", entry.method, entry.route == null ? entry.path : entry.route, logged,
+                    Math.round(millis), entry.detail == null ? "" : " " + entry.detail,
+                    delivered ? "" : " answer not delivered");
         } finally {
-            RequestIds.clear();
+            if (previous == null) {
+                RequestIds.clear();
+            } else {
+                MDC.put(RequestIds.MDC_KEY, previous);
+            }
         }
+        metrics.recordRequest(entry.method, entry.route == null ? ServiceMetrics.UNMATCHED : entry.route, logged,
+                millis);
     }
 
     /** A request that Jetty refused before the app saw it (see {@link ProblemErrorHandler}). */
     void rejected(String method, int status, String id) {
         ACCESS.info("{} {} {} rejected by the HTTP layer [{}]", method, ServiceMetrics.UNMATCHED, status, id);
         metrics.recordRequest(method, ServiceMetrics.UNMATCHED, status, 0);
-    }
-
-    private void write(Context ctx, int status, float millis, String outcome) {
-        String route = App.route(ctx);
-        String detail = ctx.attribute(DETAIL);
-        ACCESS.info("{} {} {} {}ms{}{}", ctx.method(), route == null ? ctx.path() : route, status,
-                Math.round(millis), detail == null ? "" : " " + detail, outcome);
-        metrics.recordRequest(ctx.method().name(), route == null ? ServiceMetrics.UNMATCHED : route,
-                status, millis);
     }
 }

@@ -58,12 +58,9 @@ public final class App {
             cfg.jetty.host = config.host();
             cfg.jetty.port = config.port();
             cfg.jetty.threadPool = httpThreads;
-            cfg.jetty.modifyServer(server -> HttpServerSettings.configure(server, config, jettyErrors));
+            cfg.jetty.modifyServer(server -> HttpServerSettings.configure(server, config, jettyErrors, access));
             cfg.jetty.modifyHttpConfiguration(HttpServerSettings::configure);
-            cfg.jetty.modifyServletContextHandler(context -> {
-                context.setErrorHandler(jettyErrors);
-                context.addEventListener(access);
-            });
+            cfg.jetty.modifyServletContextHandler(context -> context.setErrorHandler(jettyErrors));
             cfg.events.serverStopped(metrics::close);
             cfg.jsonMapper(new JavalinJackson(services.mapper(), false));
             cfg.requestLogger.http(access::answered);

@@ -60,10 +60,13 @@ final class HttpServerSettings {
 
     /**
      * A stop first closes the listening socket, then waits up to the grace period for the requests in
-     * flight ({@link GracefulHandler} counts them), then stops; Javalin's stop() runs all of it.
+     * flight ({@link GracefulHandler} counts them), then stops; Javalin's stop() runs all of it. The
+     * access log sits inside the graceful handler: a request refused while stopping never reaches it
+     * and is logged by the error handler.
      */
-    static void configure(Server server, ServiceConfig config, ProblemErrorHandler errors) {
+    static void configure(Server server, ServiceConfig config, ProblemErrorHandler errors, AccessLog access) {
         server.setStopTimeout(config.shutdownGraceSeconds() * 1000L);
+        server.insertHandler(access);
         server.insertHandler(new GracefulHandler());
         server.setErrorHandler(errors);
     }

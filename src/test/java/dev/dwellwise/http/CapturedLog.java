@@ -6,6 +6,7 @@ import ch.qos.logback.classic.spi.ILoggingEvent;
 import ch.qos.logback.core.AppenderBase;
 import java.util.List;
 import java.util.concurrent.ConcurrentLinkedQueue;
+import java.util.concurrent.TimeUnit;
 import org.slf4j.LoggerFactory;
 
 /** Records what one logger writes (at INFO and above) while a test runs, with each event's MDC. */
@@ -33,6 +34,18 @@ final class CapturedLog extends AppenderBase<ILoggingEvent> implements AutoClose
     protected void append(ILoggingEvent event) {
         event.prepareForDeferredProcessing();
         events.add(event);
+    }
+
+    /**
+     * Waits (bounded) until at least {@code count} events are logged: an access line is written when
+     * Jetty completes the request, which can be a moment after the client has read the answer.
+     */
+    CapturedLog awaitEvents(int count) throws InterruptedException {
+        long deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(Http.TIMEOUT_MILLIS);
+        while (events.size() < count && System.nanoTime() < deadline) {
+            Thread.sleep(5);
+        }
+        return this;
     }
 
     /** The request ids in the MDC of the events logged so far, in order. */

@@ -69,10 +69,10 @@ class ReleaseChecksHttpTest {
     }
 
     @Test
-    void theAccessLineOfAReleaseCheckIsTheAuditTrailOfTheDecision() {
+    void theAccessLineOfAReleaseCheckIsTheAuditTrailOfTheDecision() throws InterruptedException {
         try (CapturedLog access = CapturedLog.of("dwellwise.access")) {
             String hash = post(release("B-2026-0412/08", curingJob())).statusCode(200).extract().path("inputSha256");
-            assertEquals(1, access.messages().size(), access.messages().toString());
+            assertEquals(1, access.awaitEvents(1).messages().size(), access.messages().toString());
             assertEquals("POST /v1/release-checks 200 ms batch=B-2026-0412/08 release=true inputSha256=" + hash,
                     access.messages().get(0).replaceFirst(" \\d+ms ", " ms "));
         }

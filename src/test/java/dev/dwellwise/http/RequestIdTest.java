@@ -66,7 +66,7 @@ class RequestIdTest {
     }
 
     @Test
-    void theAccessLineOfEveryAnswerCarriesItsIdIncludingErrors() {
+    void theAccessLineOfEveryAnswerCarriesItsIdIncludingErrors() throws InterruptedException {
         try (CapturedLog access = CapturedLog.of("dwellwise.access")) {
             String refused = Http.given(service).header("X-Request-Id", "refused-1").get("/v1/materials")
                     .then().statusCode(401).extract().header("X-Request-Id");
@@ -76,7 +76,7 @@ class RequestIdTest {
             String invalid = Http.given(service).header("Authorization", "Bearer " + TOKEN)
                     .header("X-Request-Id", "invalid-1").contentType("application/json").body("{\"part\": {}}")
                     .post("/v1/simulations").then().statusCode(422).extract().header("X-Request-Id");
-            assertEquals(List.of(refused, missing, invalid), access.requestIds());
+            assertEquals(List.of(refused, missing, invalid), access.awaitEvents(3).requestIds());
             assertTrue(access.messages().get(0).matches("GET /v1/materials 401 \\d+ms"), access.messages().get(0));
             assertTrue(access.messages().get(1).matches("GET /v1/nowhere 404 \\d+ms"), access.messages().get(1));
             assertTrue(access.messages().get(2).matches("POST /v1/simulations 422 \\d+ms"), access.messages().get(2));
@@ -84,11 +84,11 @@ class RequestIdTest {
     }
 
     @Test
-    void theAccessLineOfASolveCarriesItsSummaryAndIsTheRequestsOnlyLine() {
+    void theAccessLineOfASolveCarriesItsSummaryAndIsTheRequestsOnlyLine() throws InterruptedException {
         try (CapturedLog all = CapturedLog.of(org.slf4j.Logger.ROOT_LOGGER_NAME)) {
             Http.given(service).header("Authorization", "Bearer " + TOKEN).header("X-Request-Id", "solve-1")
                     .contentType("application/json").body(Workloads.PANEL).post("/v1/simulations").then().statusCode(200);
-            assertEquals(List.of("solve-1"), all.requestIds());
+            assertEquals(List.of("solve-1"), all.awaitEvents(1).requestIds());
             assertTrue(all.messages().get(0).matches(
                     "POST /v1/simulations 200 \\d+ms model=lumped steps=\\d+ evaluations=\\d+ verdict=(pass|fail)"),
                     all.messages().get(0));
