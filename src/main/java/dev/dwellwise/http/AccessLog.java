@@ -41,10 +41,14 @@ final class AccessLog extends EventsHandler {
         this.metrics = metrics;
     }
 
-    /** What the line says about the app's handling; filled on the serving thread. */
+    /**
+     * What the line says about the app's handling: filled on the serving thread, read where Jetty
+     * completes the request (after the dispatch has returned, maybe on another thread). {@code taken}
+     * is written last and read first, so whoever sees it set sees the rest.
+     */
     private static final class Entry {
         private Context ctx;
-        private boolean taken;
+        private volatile boolean taken;
         private String method;
         private String route;
         private String path;
@@ -52,14 +56,14 @@ final class AccessLog extends EventsHandler {
         private String detail;
         private String requestId;
 
-        void take(Context context) {
-            taken = true;
+        void take(Context context, int answeredStatus) {
             method = context.method().name();
             route = App.route(context);
             path = context.path();
-            status = context.statusCode();
+            status = answeredStatus;
             detail = context.attribute(DETAIL);
             requestId = context.attribute(RequestIds.ATTRIBUTE);
+            taken = true;
         }
     }
 
@@ -78,7 +82,7 @@ final class AccessLog extends EventsHandler {
     /** Javalin's request logger: the answer has been handed to Jetty. */
     void answered(Context ctx, float millis) {
         if (ctx.attribute(ENTRY) instanceof Entry entry) {
-            entry.take(ctx);
+            entry.take(ctx, ctx.statusCode());
         }
     }
 
@@ -86,8 +90,7 @@ final class AccessLog extends EventsHandler {
     protected void onAfterHandling(Request request, boolean handled, Throwable failure) {
         // the serving thread, the dispatch over: Javalin's logger may have been skipped
         if (request.getAttribute(ENTRY) instanceof Entry entry && entry.ctx != null && !entry.taken) {
-            entry.take(entry.ctx);
-            entry.status = NOT_DELIVERED;
+            entry.take(entry.ctx, NOT_DELIVERED);
         }
         RequestIds.clear();
     }
