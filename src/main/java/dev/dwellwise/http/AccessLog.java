@@ -1,6 +1,7 @@
 package dev.dwellwise.http;
 
 import io.javalin.http.Context;
+import java.nio.ByteBuffer;
 import org.eclipse.jetty.http.HttpFields;
 import org.eclipse.jetty.server.Request;
 import org.eclipse.jetty.server.handler.EventsHandler;
@@ -14,7 +15,8 @@ import org.slf4j.MDC;
  * The app's part (route, status, what the solve adds) is taken on the serving thread: from
  * Javalin's request logger ({@link #answered}), or, where Javalin skipped it because copying the
  * answer failed, once the dispatch is over. An answer whose sending failed, a client that closed the
- * connection or timed out while it was being sent, is logged and counted with status 499 and
+ * connection or timed out before it was sent (its last write did not complete; a failure to read a
+ * body the app never needed does not count), is logged and counted with status 499 and
  * {@code answer not delivered}, what Javalin and common practice give a client that went away:
  * its status line may have gone out as 200, but the answer did not arrive.
  *
@@ -55,6 +57,8 @@ final class AccessLog extends EventsHandler {
         private int status;
         private String detail;
         private String requestId;
+        /** The answer's last write completed: Jetty handed all of it to the connection. */
+        private volatile boolean sent;
 
         void take(Context context, int answeredStatus) {
             method = context.method().name();
@@ -88,11 +92,20 @@ final class AccessLog extends EventsHandler {
 
     @Override
     protected void onAfterHandling(Request request, boolean handled, Throwable failure) {
-        // the serving thread, the dispatch over: Javalin's logger may have been skipped
-        if (request.getAttribute(ENTRY) instanceof Entry entry && entry.ctx != null && !entry.taken) {
+        // the serving thread, the dispatch over: Javalin's logger may have been skipped (an asynchronous
+        // route, none today, would log later and is left to do so)
+        if (request.getAttribute(ENTRY) instanceof Entry entry && entry.ctx != null && !entry.taken
+                && !entry.ctx.req().isAsyncStarted()) {
             entry.take(entry.ctx, NOT_DELIVERED);
         }
         RequestIds.clear();
+    }
+
+    @Override
+    protected void onResponseWriteComplete(Request request, boolean last, ByteBuffer content, Throwable failure) {
+        if (last && failure == null && request.getAttribute(ENTRY) instanceof Entry entry) {
+            entry.sent = true;
+        }
     }
 
     @Override
@@ -100,9 +113,12 @@ final class AccessLog extends EventsHandler {
         if (!(request.getAttribute(ENTRY) instanceof Entry entry) || !entry.taken) {
             return; // refused before the app saw it: ProblemErrorHandler wrote its line
         }
-        boolean delivered = failure == null && entry.status != NOT_DELIVERED;
+        boolean delivered = entry.sent && entry.status != NOT_DELIVERED;
         int logged = delivered ? entry.status : NOT_DELIVERED;
         double millis = (System.nanoTime() - request.getBeginNanoTime()) / 1e6;
+        // counted before the line is written: a test that has seen the line may read the count
+        metrics.recordRequest(entry.method, entry.route == null ? ServiceMetrics.UNMATCHED : entry.route, logged,
+                millis);
         // may run on another thread than the one that served the request
         String previous = MDC.get(RequestIds.MDC_KEY);
         if (entry.requestId != null) {
@@ -119,8 +135,6 @@ final class AccessLog extends EventsHandler {
                 MDC.put(RequestIds.MDC_KEY, previous);
             }
         }
-        metrics.recordRequest(entry.method, entry.route == null ? ServiceMetrics.UNMATCHED : entry.route, logged,
-                millis);
     }
 
     /** A request that Jetty refused before the app saw it (see {@link ProblemErrorHandler}). */

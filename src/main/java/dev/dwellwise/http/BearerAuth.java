@@ -33,7 +33,9 @@ final class BearerAuth {
      * the same handler as {@code /metrics}.
      */
     void check(Context ctx) {
-        if (expectedDigest.isEmpty() || ctx.method() == HandlerType.OPTIONS || OPEN_PATHS.contains(App.route(ctx))) {
+        String route = App.route(ctx); // null for HEAD, which Javalin answers from the GET route
+        if (expectedDigest.isEmpty() || ctx.method() == HandlerType.OPTIONS
+                || route != null && OPEN_PATHS.contains(route)) {
             return;
         }
         String header = ctx.header("Authorization");

@@ -79,6 +79,13 @@ class BearerAuthTest {
     }
 
     @Test
+    void aHeadRequestIsRefusedWithoutATokenNotAnsweredWithAServerError() {
+        // a HEAD matches no route of its own (Javalin answers it from the GET route)
+        Http.given(secured).head("/v1/materials").then().statusCode(401);
+        Http.given(secured).header("Authorization", "Bearer " + TOKEN).head("/v1/materials").then().statusCode(200);
+    }
+
+    @Test
     void aPathThatOnlyLooksLikeAnOpenOneStaysClosed() {
         Http.given(secured).get("/health/live/../../v1/materials").then().statusCode(anyOf(is(401), is(404)));
         Http.given(secured).get("/v1/materials?x=/health/live").then().statusCode(401);

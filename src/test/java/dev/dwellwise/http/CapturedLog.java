@@ -37,15 +37,22 @@ final class CapturedLog extends AppenderBase<ILoggingEvent> implements AutoClose
     }
 
     /**
-     * Waits (bounded) until at least {@code count} events are logged: an access line is written when
-     * Jetty completes the request, which can be a moment after the client has read the answer.
+     * The lines logged under a request id, after waiting (bounded) for the first and then a moment
+     * for any more: an access line is written when Jetty completes the request, which can be a
+     * moment after the client has read the answer.
      */
-    CapturedLog awaitEvents(int count) throws InterruptedException {
+    List<String> linesOf(String requestId) throws InterruptedException {
         long deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(Http.TIMEOUT_MILLIS);
-        while (events.size() < count && System.nanoTime() < deadline) {
+        while (messagesOf(requestId).isEmpty() && System.nanoTime() < deadline) {
             Thread.sleep(5);
         }
-        return this;
+        Thread.sleep(50);
+        return messagesOf(requestId);
+    }
+
+    private List<String> messagesOf(String requestId) {
+        return events.stream().filter(e -> requestId.equals(e.getMDCPropertyMap().get(RequestIds.MDC_KEY)))
+                .map(ILoggingEvent::getFormattedMessage).toList();
     }
 
     /** The request ids in the MDC of the events logged so far, in order. */

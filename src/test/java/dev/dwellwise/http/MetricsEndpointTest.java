@@ -120,22 +120,12 @@ class MetricsEndpointTest {
             } finally {
                 gate.open(); // after the resource's close(): the reset reaches the service first
             }
-            String line = awaitLine(access, id);
+            List<String> lines = access.linesOf(id);
+            assertEquals(1, lines.size(), lines.toString());
+            // counted before the line was written
             assertEquals(1, value(Http.given(gated).get("/metrics").then().statusCode(200).extract().asString(), count));
-            return line;
+            return lines.get(0);
         }
-    }
-
-    private static String awaitLine(CapturedLog access, String id) throws InterruptedException {
-        for (int i = 0; i < 200; i++) {
-            List<String> ids = access.requestIds();
-            int at = ids.indexOf(id);
-            if (at >= 0) {
-                return access.messages().get(at);
-            }
-            Thread.sleep(50);
-        }
-        throw new AssertionError("no access line for " + id + " within 10 s");
     }
 
     /** Scrapes until the series reaches at least {@code atLeast} (bounded); its last value. */
