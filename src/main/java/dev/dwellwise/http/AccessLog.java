@@ -60,11 +60,11 @@ final class AccessLog extends EventsHandler {
         /** The answer's last write completed: Jetty handed all of it to the connection. */
         private volatile boolean sent;
 
-        void take(Context context, int answeredStatus) {
+        void take(Context context) {
             method = context.method().name();
             route = App.route(context);
             path = context.path();
-            status = answeredStatus;
+            status = context.statusCode();
             detail = context.attribute(DETAIL);
             requestId = context.attribute(RequestIds.ATTRIBUTE);
             taken = true;
@@ -86,7 +86,7 @@ final class AccessLog extends EventsHandler {
     /** Javalin's request logger: the answer has been handed to Jetty. */
     void answered(Context ctx, float millis) {
         if (ctx.attribute(ENTRY) instanceof Entry entry) {
-            entry.take(ctx, ctx.statusCode());
+            entry.take(ctx);
         }
     }
 
@@ -96,7 +96,7 @@ final class AccessLog extends EventsHandler {
         // route, none today, would log later and is left to do so)
         if (request.getAttribute(ENTRY) instanceof Entry entry && entry.ctx != null && !entry.taken
                 && !entry.ctx.req().isAsyncStarted()) {
-            entry.take(entry.ctx, NOT_DELIVERED);
+            entry.take(entry.ctx); // its send failed, so its last write never completes: a 499
         }
         RequestIds.clear();
     }
@@ -113,8 +113,7 @@ final class AccessLog extends EventsHandler {
         if (!(request.getAttribute(ENTRY) instanceof Entry entry) || !entry.taken) {
             return; // refused before the app saw it: ProblemErrorHandler wrote its line
         }
-        boolean delivered = entry.sent && entry.status != NOT_DELIVERED;
-        int logged = delivered ? entry.status : NOT_DELIVERED;
+        int logged = entry.sent ? entry.status : NOT_DELIVERED;
         double millis = (System.nanoTime() - request.getBeginNanoTime()) / 1e6;
         // counted before the line is written: a test that has seen the line may read the count
         metrics.recordRequest(entry.method, entry.route == null ? ServiceMetrics.UNMATCHED : entry.route, logged,
@@ -127,7 +126,7 @@ final class AccessLog extends EventsHandler {
         try {
             ACCESS.info("{} {} {} {}ms{}{}", entry.method, entry.route == null ? entry.path : entry.route, logged,
                     Math.round(millis), entry.detail == null ? "" : " " + entry.detail,
-                    delivered ? "" : " answer not delivered");
+                    entry.sent ? "" : " answer not delivered");
         } finally {
             if (previous == null) {
                 RequestIds.clear();

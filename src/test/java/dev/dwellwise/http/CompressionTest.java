@@ -12,13 +12,11 @@ import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
 import java.nio.charset.StandardCharsets;
 import java.time.Duration;
-import java.util.Map;
 import java.util.Optional;
 import java.util.zip.GZIPInputStream;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 /**
  * Gzip only where it pays: a series or a chart for a client that accepts gzip, not a summary (see
@@ -32,17 +30,8 @@ class CompressionTest {
     private static final String SERIES = seriesEvery(1);
     private static final HttpClient CLIENT = HttpClient.newBuilder().version(HttpClient.Version.HTTP_1_1)
             .connectTimeout(Duration.ofMillis(Http.TIMEOUT_MILLIS)).build();
-    private static RunningService service;
-
-    @BeforeAll
-    static void start() {
-        service = RunningService.start(Map.of());
-    }
-
-    @AfterAll
-    static void stop() {
-        service.close();
-    }
+    @RegisterExtension
+    static final BundledServer SERVER = new BundledServer();
 
     @Test
     void aSummaryGoesPlainEvenToAClientThatAcceptsGzip() throws Exception {
@@ -106,7 +95,7 @@ class CompressionTest {
 
     private static HttpResponse<byte[]> post(String job, String acceptEncoding, String accept)
             throws IOException, InterruptedException {
-        HttpRequest.Builder request = HttpRequest.newBuilder(URI.create(service.url("/v1/simulations")))
+        HttpRequest.Builder request = HttpRequest.newBuilder(URI.create("http://127.0.0.1:" + SERVER.app().port() + "/v1/simulations"))
                 .timeout(Duration.ofMillis(Http.TIMEOUT_MILLIS))
                 .header("Content-Type", "application/json")
                 .header("Accept", accept)
