@@ -60,6 +60,12 @@ final class CapturedLog extends AppenderBase<ILoggingEvent> implements AutoClose
         return events.stream().map(e -> e.getMDCPropertyMap().get(RequestIds.MDC_KEY)).toList();
     }
 
+    /** The request id in the MDC (null where there was none) of each event whose message contains the text. */
+    List<String> requestIdsOfLinesContaining(String text) {
+        return events.stream().filter(e -> e.getFormattedMessage().contains(text))
+                .map(e -> e.getMDCPropertyMap().get(RequestIds.MDC_KEY)).toList();
+    }
+
     List<String> messages() {
         return events.stream().map(ILoggingEvent::getFormattedMessage).toList();
     }

@@ -1,11 +1,15 @@
 package dev.dwellwise.http;
 
+import static java.nio.charset.StandardCharsets.ISO_8859_1;
 import static org.hamcrest.Matchers.equalTo;
 import static org.hamcrest.Matchers.matchesPattern;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import io.restassured.response.Response;
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.net.Socket;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
@@ -94,6 +98,45 @@ class RequestIdTest {
                     .contentType("application/json").body(Workloads.PANEL).post("/v1/simulations").then().statusCode(200);
             assertOneLine(all, "solve-1",
                     "POST /v1/simulations 200 \\d+ms model=lumped steps=\\d+ evaluations=\\d+ verdict=(pass|fail)");
+        }
+    }
+
+    /**
+     * A line written on a server thread outside any request (Jetty's refusal of a malformed request)
+     * must not carry the id of a request that thread served before: the id is taken out of the
+     * thread's logging context after every dispatch. Each round serves a request on a kept-alive
+     * connection and then sends garbage on it, so the refusal is parsed where the request was read.
+     */
+    @Test
+    void noRefusalLineCarriesTheIdOfAnEarlierRequest() throws Exception {
+        try (CapturedLog access = CapturedLog.of("dwellwise.access")) {
+            for (int round = 0; round < 40; round++) {
+                try (Socket socket = new Socket("127.0.0.1", service.port())) {
+                    socket.setSoTimeout(Http.TIMEOUT_MILLIS);
+                    OutputStream out = socket.getOutputStream();
+                    InputStream in = socket.getInputStream();
+                    out.write(("GET /health/live HTTP/1.1\r\nHost: x\r\nX-Request-Id: earlier-" + round
+                            + "\r\n\r\n").getBytes(ISO_8859_1));
+                    out.flush();
+                    byte[] buffer = new byte[8192];
+                    String answer = "";
+                    while (!answer.contains("\r\n\r\n")) { // health answers are small: headers and body come together
+                        int read = in.read(buffer);
+                        assertTrue(read > 0, "the connection closed before the answer");
+                        answer += new String(buffer, 0, read, ISO_8859_1);
+                    }
+                    assertTrue(answer.startsWith("HTTP/1.1 200 "), answer);
+                    out.write("GARBAGE\r\n\r\n".getBytes(ISO_8859_1));
+                    out.flush();
+                    socket.shutdownOutput();
+                    in.transferTo(OutputStream.nullOutputStream());
+                }
+            }
+            // a refusal's line is written before its answer, so all of them are in by now
+            List<String> idsOnRefusals = access.requestIdsOfLinesContaining("rejected by the HTTP layer");
+            assertEquals(40, idsOnRefusals.size(), idsOnRefusals.toString());
+            assertTrue(idsOnRefusals.stream().noneMatch(id -> id != null && id.startsWith("earlier-")),
+                    "refusals logged under the id of an earlier request: " + idsOnRefusals);
         }
     }
 
