@@ -250,11 +250,7 @@ class HttpBadInputTest {
     @ParameterizedTest(name = "{0}, with no stack trace or Java class name in the answer")
     @MethodSource("cases")
     void carriesNoStackTraceOrClassName(Case c) {
-        String body = answer(c).asString();
-        for (String leak : List.of("Exception", "at dev.", "java.", "jakarta.", "com.fasterxml", "io.javalin",
-                "org.eclipse")) {
-            assertFalse(body.contains(leak), () -> "the answer mentions '" + leak + "': " + body);
-        }
+        Internals.assertNone(answer(c).asString());
     }
 
     /**

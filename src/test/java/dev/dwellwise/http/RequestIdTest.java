@@ -120,7 +120,8 @@ class RequestIdTest {
                     out.flush();
                     byte[] buffer = new byte[8192];
                     String answer = "";
-                    while (!answer.contains("\r\n\r\n")) { // health answers are small: headers and body come together
+                    // a health answer is small: its headers and body arrive together
+                    while (!answer.contains("\r\n\r\n")) {
                         int read = in.read(buffer);
                         assertTrue(read > 0, "the connection closed before the answer");
                         answer += new String(buffer, 0, read, ISO_8859_1);
