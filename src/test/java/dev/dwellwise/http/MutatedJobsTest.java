@@ -201,6 +201,9 @@ class MutatedJobsTest {
     private static String breakOne(ObjectNode root, SplittableRandom random, Map<String, String> literals) {
         List<Place> places = new ArrayList<>();
         collect(root, "", places);
+        if (places.isEmpty()) {
+            return "nothing left to break";
+        }
         Place place = places.get(random.nextInt(places.size()));
         int kind = random.nextInt(10);
         if (kind < 5) {
@@ -239,6 +242,9 @@ class MutatedJobsTest {
         List<Place> places = new ArrayList<>();
         collect(root, "", places);
         List<Place> numbers = places.stream().filter(p -> p.value().isNumber()).toList();
+        if (numbers.isEmpty()) {
+            return "no number left to scale";
+        }
         Place place = numbers.get(random.nextInt(numbers.size()));
         double scaled = place.value().doubleValue() * Math.pow(10, random.nextDouble(-2, 2))
                 * (random.nextInt(4) == 0 ? -1 : 1);
