@@ -61,7 +61,7 @@ final class AccessLog extends EventsHandler {
         private volatile boolean sent;
 
         void take(Context context) {
-            method = context.method().name();
+            method = ServiceMetrics.method(context.method().name());
             route = App.route(context);
             path = context.path();
             status = context.statusCode();
@@ -138,7 +138,8 @@ final class AccessLog extends EventsHandler {
 
     /** A request that Jetty refused before the app saw it (see {@link ProblemErrorHandler}). */
     void rejected(String method, int status, String id) {
-        ACCESS.info("{} {} {} rejected by the HTTP layer [{}]", method, ServiceMetrics.UNMATCHED, status, id);
-        metrics.recordRequest(method, ServiceMetrics.UNMATCHED, status, 0);
+        String label = "-".equals(method) ? method : ServiceMetrics.method(method);
+        ACCESS.info("{} {} {} rejected by the HTTP layer [{}]", label, ServiceMetrics.UNMATCHED, status, id);
+        metrics.recordRequest(label, ServiceMetrics.UNMATCHED, status, 0);
     }
 }

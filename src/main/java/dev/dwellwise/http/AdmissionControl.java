@@ -14,6 +14,10 @@ import java.util.function.Supplier;
  * than piling up behind the others; so is one that waited a whole compute budget without getting
  * a worker. Solves run on the request's own thread: the HTTP thread pool is sized to hold every
  * admitted solve plus headroom, so probes and scrapes are answered while the solvers are full.
+ *
+ * <p>A request takes its {@linkplain #enter place} before its body is read, since reading blocks
+ * the thread too: clients that send their bodies slowly can then take the queue places, and get
+ * the others 503s, but never the headroom that the probes are answered from.
  */
 final class AdmissionControl {
 
@@ -47,30 +51,54 @@ final class AdmissionControl {
         Gauge.builder("dwellwise.solves.active", this, AdmissionControl::active)
                 .description("Solves computing now").register(registry);
         Gauge.builder("dwellwise.solves.waiting", this, AdmissionControl::waiting)
-                .description("Solves waiting for a worker").register(registry);
+                .description("Admitted solves not computing: waiting for a worker, or for their body")
+                .register(registry);
     }
 
-    /** Runs the solve when a worker is free; throws a 503 problem when the service is at capacity. */
-    <T> T run(Supplier<T> solve) {
+    /**
+     * A place among the admitted requests, from before the body is read to the end of the solve;
+     * throws a 503 problem when every worker and queue place is taken.
+     */
+    Place enter() {
         if (!admitted.tryAcquire()) {
             throw overloaded("all " + workers + " workers are busy and all " + queue + " queue places are taken");
         }
-        try {
-            long start = System.nanoTime();
-            if (!computing.tryAcquire(maxWaitMillis, TimeUnit.MILLISECONDS)) {
-                throw overloaded("no worker came free within " + maxWaitMillis + " ms");
-            }
-            waited.record(System.nanoTime() - start, TimeUnit.NANOSECONDS);
+        return new Place();
+    }
+
+    /** A request's place, given back once. */
+    final class Place implements AutoCloseable {
+
+        private boolean left;
+
+        private Place() {
+        }
+
+        /** Runs the solve when a worker is free; throws a 503 problem when none comes free in time. */
+        <T> T compute(Supplier<T> solve) {
             try {
-                return solve.get();
-            } finally {
-                computing.release();
+                long start = System.nanoTime();
+                if (!computing.tryAcquire(maxWaitMillis, TimeUnit.MILLISECONDS)) {
+                    throw overloaded("no worker came free within " + maxWaitMillis + " ms");
+                }
+                waited.record(System.nanoTime() - start, TimeUnit.NANOSECONDS);
+                try {
+                    return solve.get();
+                } finally {
+                    computing.release();
+                }
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw overloaded("the service is stopping");
             }
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw overloaded("the service is stopping");
-        } finally {
-            admitted.release();
+        }
+
+        @Override
+        public void close() {
+            if (!left) {
+                left = true;
+                admitted.release();
+            }
         }
     }
 

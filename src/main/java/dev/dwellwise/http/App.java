@@ -6,12 +6,18 @@ import dev.dwellwise.job.FieldError;
 import dev.dwellwise.job.InvalidJobException;
 import dev.dwellwise.thermal.ComputeLimitExceededException;
 import io.javalin.Javalin;
+import io.javalin.config.RouterConfig;
 import io.javalin.http.Context;
+import io.javalin.http.Handler;
 import io.javalin.http.HandlerType;
 import io.javalin.http.HttpResponseException;
 import io.javalin.json.JavalinJackson;
+import io.javalin.router.matcher.PathParser;
 import java.io.IOException;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.function.BiConsumer;
 import org.eclipse.jetty.util.thread.QueuedThreadPool;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
@@ -29,6 +35,8 @@ import org.slf4j.LoggerFactory;
 public final class App {
 
     private static final Logger LOG = LoggerFactory.getLogger(App.class);
+    /** Request attribute: the route template of a HEAD's or an OPTIONS's path, or absent. */
+    private static final String ROUTE_OF_PATH = "dwellwise.routeOfPath";
 
     private App() {
     }
@@ -65,13 +73,24 @@ public final class App {
             cfg.jsonMapper(new JavalinJackson(services.mapper(), false));
             cfg.requestLogger.http(access::answered);
 
+            RouteTable table = new RouteTable(cfg.router);
             cfg.routes.before(ctx -> {
                 RequestIds.assign(ctx);
+                if (ctx.method() == HandlerType.HEAD || ctx.method() == HandlerType.OPTIONS) {
+                    String template = table.template(ctx.path());
+                    if (template != null) {
+                        ctx.attribute(ROUTE_OF_PATH, template);
+                    }
+                }
                 access.begin(ctx);
                 SecurityHeaders.apply(ctx::header);
                 cors.apply(ctx);
                 if (ctx.method() == HandlerType.OPTIONS) {
-                    cors.options(ctx);
+                    String methods = table.allowed(ctx.path());
+                    if (methods == null) {
+                        throw new ApiException(ProblemType.NOT_FOUND, "no resource at " + ctx.path());
+                    }
+                    cors.options(ctx, methods);
                     ctx.skipRemainingHandlers();
                 }
             });
@@ -79,16 +98,24 @@ public final class App {
             // 404 without a token, which tells nothing that the contract does not.
             cfg.routes.beforeMatched(auth::check);
 
-            cfg.routes.get("/health/live", ctx -> ctx.json(new Health("up")));
-            cfg.routes.get("/health/ready", ctx -> ctx.json(new Health("ready")));
-            cfg.routes.get("/metrics", ctx -> ctx.contentType(ServiceMetrics.CONTENT_TYPE).result(metrics.scrape()));
-            cfg.routes.get("/openapi.yaml", ctx -> ctx.contentType(MediaTypes.YAML).result(services.openApi()));
-            cfg.routes.get("/v1/materials", library::materials);
-            cfg.routes.get("/v1/materials/{id}", library::material);
-            cfg.routes.get("/v1/examples", library::examples);
-            cfg.routes.get("/v1/examples/{id}", library::example);
-            cfg.routes.post("/v1/simulations", simulations::simulate);
-            cfg.routes.post("/v1/release-checks", releases::release);
+            BiConsumer<String, Handler> get = (path, handler) -> {
+                cfg.routes.get(path, handler);
+                table.add(HandlerType.GET, path);
+            };
+            BiConsumer<String, Handler> post = (path, handler) -> {
+                cfg.routes.post(path, handler);
+                table.add(HandlerType.POST, path);
+            };
+            get.accept("/health/live", ctx -> ctx.json(new Health("up")));
+            get.accept("/health/ready", ctx -> ctx.json(new Health("ready")));
+            get.accept("/metrics", ctx -> ctx.contentType(ServiceMetrics.CONTENT_TYPE).result(metrics.scrape()));
+            get.accept("/openapi.yaml", ctx -> ctx.contentType(MediaTypes.YAML).result(services.openApi()));
+            get.accept("/v1/materials", library::materials);
+            get.accept("/v1/materials/{id}", library::material);
+            get.accept("/v1/examples", library::examples);
+            get.accept("/v1/examples/{id}", library::example);
+            post.accept("/v1/simulations", simulations::simulate);
+            post.accept("/v1/release-checks", releases::release);
 
             cfg.routes.exception(ApiException.class, (e, ctx) -> problems.write(ctx, e.type(), e.getMessage(),
                     e.errors()));
@@ -130,8 +157,14 @@ public final class App {
         });
     }
 
-    /** The matched route template ({@code /v1/materials/{id}}), or null where none matched. */
+    /**
+     * The matched route template ({@code /v1/materials/{id}}), or null where none matched; for a HEAD
+     * or an OPTIONS, the template of the path's routes.
+     */
     static String route(Context ctx) {
+        if (ctx.method() == HandlerType.HEAD || ctx.method() == HandlerType.OPTIONS) {
+            return ctx.attribute(ROUTE_OF_PATH);
+        }
         try {
             io.javalin.router.Endpoint endpoint = ctx.endpoints().matchedHttpEndpoint();
             return endpoint == null ? null : endpoint.path;
@@ -180,6 +213,55 @@ public final class App {
             }
         }
         return status >= 500 ? ProblemType.INTERNAL : ProblemType.UNREADABLE_BODY;
+    }
+
+    /**
+     * The routes, matched as Javalin's router matches them, for what Javalin does not route itself:
+     * it answers a HEAD from the GET route of its path without running it (so the HEAD matches no
+     * route of its own), and the app answers OPTIONS before routing. This names the route a HEAD or
+     * an OPTIONS stands for (for the token's open paths, the metrics and the access line) and the
+     * methods a path offers (RFC 9110, 9.3.7).
+     */
+    private static final class RouteTable {
+
+        private final RouterConfig router;
+        /** In the order of registration: the first that matches wins, as in Javalin's router. */
+        private final List<Route> routes = new CopyOnWriteArrayList<>();
+
+        private record Route(HandlerType method, String template, PathParser parser) {
+        }
+
+        RouteTable(RouterConfig router) {
+            this.router = router;
+        }
+
+        void add(HandlerType method, String template) {
+            routes.add(new Route(method, template, new PathParser(template, router)));
+        }
+
+        /** The template of the first route that matches the path, or null. */
+        String template(String path) {
+            return routes.stream().filter(r -> r.parser().matches(path)).map(Route::template).findFirst()
+                    .orElse(null);
+        }
+
+        /** The {@code Allow} value of the path (a GET brings HEAD, and OPTIONS is always there), or null for none. */
+        String allowed(String path) {
+            List<String> methods = new ArrayList<>();
+            for (Route route : routes) {
+                if (route.parser().matches(path) && !methods.contains(route.method().name())) {
+                    methods.add(route.method().name());
+                    if (route.method() == HandlerType.GET) {
+                        methods.add(HandlerType.HEAD.name());
+                    }
+                }
+            }
+            if (methods.isEmpty()) {
+                return null;
+            }
+            methods.add(HandlerType.OPTIONS.name());
+            return String.join(", ", methods);
+        }
     }
 
     /** The body of the health probes. */

@@ -5,6 +5,7 @@ import io.javalin.http.HandlerType;
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
+import java.util.Collections;
 import java.util.Optional;
 import java.util.Set;
 
@@ -33,10 +34,15 @@ final class BearerAuth {
      * the same handler as {@code /metrics}.
      */
     void check(Context ctx) {
-        String route = App.route(ctx); // null for HEAD, which Javalin answers from the GET route
+        String route = App.route(ctx);
         if (expectedDigest.isEmpty() || ctx.method() == HandlerType.OPTIONS
                 || route != null && OPEN_PATHS.contains(route)) {
             return;
+        }
+        if (Collections.list(ctx.req().getHeaders("Authorization")).size() > 1) {
+            // which one would count is the server's guess: refuse rather than pick (RFC 6750, 3.1)
+            ctx.header("WWW-Authenticate", CHALLENGE + ", error=\"invalid_request\"");
+            throw new ApiException(ProblemType.UNAUTHORIZED, "send one Authorization header, not several");
         }
         String header = ctx.header("Authorization");
         if (header == null || !header.regionMatches(true, 0, "Bearer ", 0, 7)) {

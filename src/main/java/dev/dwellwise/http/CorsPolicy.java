@@ -10,11 +10,11 @@ import java.util.Set;
  * gets {@code Access-Control-Allow-Origin} naming it (never {@code *}, since requests carry a bearer
  * token); any other origin gets no CORS header at all, so the browser withholds the answer.
  * Preflights ({@code OPTIONS} with {@code Access-Control-Request-Method}) are answered here with 204,
- * before authentication: browsers send them without credentials.
+ * before authentication: browsers send them without credentials. The methods a preflight may use
+ * are those of its path.
  */
 final class CorsPolicy {
 
-    static final String ALLOWED_METHODS = "GET, POST, OPTIONS";
     static final String ALLOWED_HEADERS = "Authorization, Content-Type, Accept, X-Request-Id";
     /** Headers a page may read from an answer besides the simple ones. */
     static final String EXPOSED_HEADERS = "X-Request-Id, Retry-After, WWW-Authenticate";
@@ -39,7 +39,7 @@ final class CorsPolicy {
         }
         ctx.header("Access-Control-Allow-Origin", origin);
         if (isPreflight(ctx)) {
-            ctx.header("Access-Control-Allow-Methods", ALLOWED_METHODS);
+            // the methods come with the answer to the OPTIONS (options), which knows the path's
             ctx.header("Access-Control-Allow-Headers", ALLOWED_HEADERS);
             ctx.header("Access-Control-Max-Age", MAX_AGE_SECONDS);
         } else {
@@ -47,9 +47,16 @@ final class CorsPolicy {
         }
     }
 
-    /** Any OPTIONS request: 204 with the methods, plus the preflight headers set by {@link #apply}. */
-    void options(Context ctx) {
-        ctx.header("Allow", ALLOWED_METHODS);
+    /**
+     * An OPTIONS on a path the service has: 204 with the path's methods ({@code Allow}, and for a
+     * preflight of an allowed origin {@code Access-Control-Allow-Methods}), plus the preflight headers
+     * set by {@link #apply}.
+     */
+    void options(Context ctx, String methods) {
+        ctx.header("Allow", methods);
+        if (isPreflight(ctx) && origins.contains(ctx.header("Origin"))) {
+            ctx.header("Access-Control-Allow-Methods", methods);
+        }
         ctx.status(204);
     }
 

@@ -6,6 +6,7 @@ import java.util.List;
 import org.eclipse.jetty.server.HttpConfiguration;
 import org.eclipse.jetty.server.Server;
 import org.eclipse.jetty.server.handler.GracefulHandler;
+import org.eclipse.jetty.server.handler.MinimumDataRateHandler;
 import org.eclipse.jetty.util.thread.QueuedThreadPool;
 
 /** How Jetty is set up under Javalin: its thread pool, graceful stop, error pages, headers and compression. */
@@ -34,6 +35,15 @@ final class HttpServerSettings {
      * default level 6; on a 35 KB series, 0.12 ms to 7.5 KB against 0.47 ms to 6.6 KB.
      */
     static final int GZIP_LEVEL = 1;
+
+    /**
+     * The slowest a request body or an answer may travel once it has started, bytes a second, as
+     * Jetty's {@link MinimumDataRateHandler} measures it: a client on the plant network sends a job of
+     * a few kilobytes in milliseconds, while one that trickles it holds a thread (and an admission
+     * place) for as long as it keeps a byte coming inside the idle timeout. At this rate the largest
+     * body the default limit allows (1 MiB) still has over four minutes.
+     */
+    static final int MIN_BODY_BYTES_PER_SECOND = 4096;
 
     private HttpServerSettings() {
     }
@@ -66,6 +76,7 @@ final class HttpServerSettings {
      */
     static void configure(Server server, ServiceConfig config, ProblemErrorHandler errors, AccessLog access) {
         server.setStopTimeout(config.shutdownGraceSeconds() * 1000L);
+        server.insertHandler(new MinimumDataRateHandler(MIN_BODY_BYTES_PER_SECOND, MIN_BODY_BYTES_PER_SECOND));
         server.insertHandler(access);
         server.insertHandler(new GracefulHandler());
         server.setErrorHandler(errors);

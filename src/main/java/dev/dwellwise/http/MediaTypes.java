@@ -41,7 +41,7 @@ final class MediaTypes {
         double q = 0;
         int specificity = -1;
         for (String part : accept.split(",")) {
-            String[] pieces = part.trim().split(";");
+            String[] pieces = part.split(";", -1); // never empty, even for a lone ";"
             String range = pieces[0].trim().toLowerCase(Locale.ROOT);
             int s;
             if (range.equals(type)) {
@@ -61,12 +61,14 @@ final class MediaTypes {
         return q;
     }
 
+    /** The weight (RFC 9110, 12.4.2): its name in any case, a value outside 0 to 1 taken to the nearer end. */
     private static double qValue(String[] pieces) {
         for (int i = 1; i < pieces.length; i++) {
             String p = pieces[i].trim();
-            if (p.startsWith("q=")) {
+            if (p.regionMatches(true, 0, "q=", 0, 2)) {
                 try {
-                    return Double.parseDouble(p.substring(2));
+                    double q = Double.parseDouble(p.substring(2));
+                    return Double.isNaN(q) ? 0 : Math.min(1, Math.max(0, q));
                 } catch (NumberFormatException e) {
                     return 0;
                 }
@@ -80,7 +82,9 @@ final class MediaTypes {
         if (contentType == null) {
             return false;
         }
-        String base = contentType.split(";")[0].trim().toLowerCase(Locale.ROOT);
+        int parameters = contentType.indexOf(';');
+        String base = (parameters < 0 ? contentType : contentType.substring(0, parameters)).trim()
+                .toLowerCase(Locale.ROOT);
         return base.equals(JSON) || (base.startsWith("application/") && base.endsWith("+json"));
     }
 }

@@ -7,6 +7,7 @@ public enum ProblemType {
     NOT_FOUND("not-found", "No such resource", 404),
     METHOD_NOT_ALLOWED("method-not-allowed", "Method not allowed on this resource", 405),
     NOT_ACCEPTABLE("not-acceptable", "None of the accepted media types can be produced", 406),
+    REQUEST_TIMEOUT("request-timeout", "The request body did not arrive in time", 408),
     BODY_TOO_LARGE("body-too-large", "The request body is too large", 413),
     UNSUPPORTED_MEDIA_TYPE("unsupported-media-type", "The request body must be application/json", 415),
     INVALID_JOB("invalid-job", "The job is invalid", 422),

@@ -29,8 +29,12 @@ final class ReleaseRoutes {
         SimulationRoutes.negotiate(ctx, List.of(MediaTypes.JSON));
         // the job's field paths in problems raised past the validator (model, compute limits) start at job.
         ctx.attribute(SimulationRoutes.JOB_PREFIX, JobValidator.RELEASE_JOB_PREFIX);
-        ReleaseRequest request = bodies.read(SimulationRoutes.body(ctx, config), ReleaseRequest.class);
-        ReleaseAnswer answer = solver.release(request);
+        SimulationRoutes.checkBody(ctx, config);
+        ReleaseAnswer answer;
+        try (AdmissionControl.Place place = solver.admit()) {
+            ReleaseRequest request = bodies.read(SimulationRoutes.readBody(ctx, config), ReleaseRequest.class);
+            answer = solver.release(place, request);
+        }
         ctx.attribute(AccessLog.DETAIL, Solver.accessDetail(answer));
         ctx.contentType(MediaTypes.JSON).result(services.mapper().writeValueAsBytes(answer));
     }

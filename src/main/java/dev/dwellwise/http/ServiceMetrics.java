@@ -12,6 +12,7 @@ import io.micrometer.prometheusmetrics.PrometheusConfig;
 import io.micrometer.prometheusmetrics.PrometheusMeterRegistry;
 import java.time.Duration;
 import java.util.List;
+import java.util.Set;
 import java.util.concurrent.TimeUnit;
 import org.eclipse.jetty.util.thread.ThreadPool;
 
@@ -26,6 +27,10 @@ final class ServiceMetrics implements AutoCloseable {
     static final String CONTENT_TYPE = "text/plain; version=0.0.4; charset=utf-8";
     /** The route tag of a request that matched no route: never the raw path, which is unbounded. */
     static final String UNMATCHED = "unmatched";
+    /** The method tag of a method outside RFC 9110's and PATCH: a client may invent any number of them. */
+    static final String OTHER_METHOD = "other";
+    private static final Set<String> METHODS = Set.of("GET", "HEAD", "POST", "PUT", "DELETE", "CONNECT", "OPTIONS",
+            "TRACE", "PATCH");
     /** Histogram buckets from a health probe (sub-millisecond) to a solve near its budget. */
     static final Duration[] LATENCY_BUCKETS = {
         Duration.ofMillis(1), Duration.ofMillis(2), Duration.ofMillis(5), Duration.ofMillis(10),
@@ -50,6 +55,11 @@ final class ServiceMetrics implements AutoCloseable {
 
     MeterRegistry registry() {
         return registry;
+    }
+
+    /** The method as the metrics and the access log name it: a bounded set. */
+    static String method(String method) {
+        return METHODS.contains(method) ? method : OTHER_METHOD;
     }
 
     /** One finished request, as {@code http_server_requests_seconds}. */

@@ -9,6 +9,7 @@ import dev.dwellwise.report.SimulationResult;
 import io.javalin.http.Context;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
+import java.util.concurrent.TimeoutException;
 
 /** {@code POST /v1/simulations}: a job in, the result out as JSON or, on request, the series as CSV or an SVG chart. */
 final class SimulationRoutes {
@@ -32,8 +33,13 @@ final class SimulationRoutes {
 
     void simulate(Context ctx) throws JsonProcessingException {
         String produce = negotiate(ctx, OFFERED);
-        Job job = bodies.read(body(ctx, config), Job.class);
-        SimulationResult result = solver.simulate(job, "");
+        checkBody(ctx, config);
+        Job job;
+        SimulationResult result;
+        try (AdmissionControl.Place place = solver.admit()) {
+            job = bodies.read(readBody(ctx, config), Job.class);
+            result = solver.simulate(place, job, "");
+        }
         ctx.attribute(AccessLog.DETAIL, Solver.accessDetail(result));
         if (!MediaTypes.JSON.equals(produce) && result.series() == null) {
             throw new ApiException(ProblemType.NOT_ACCEPTABLE, produce + " renders the series, and the job "
@@ -62,22 +68,56 @@ final class SimulationRoutes {
         return chosen;
     }
 
-    /** The request body, after the media type and size checks (415, 413). */
-    static byte[] body(Context ctx, ServiceConfig config) {
+    /** What the headers say about the body, before it is read: its media type, coding and declared size (415, 413). */
+    static void checkBody(Context ctx, ServiceConfig config) {
         if (!MediaTypes.isJson(ctx.contentType())) {
             throw new ApiException(ProblemType.UNSUPPORTED_MEDIA_TYPE, "send the job as application/json, not "
                     + (ctx.contentType() == null ? "a body without a Content-Type" : ctx.contentType()));
+        }
+        String coding = ctx.header("Content-Encoding");
+        if (coding != null && !coding.isBlank() && !coding.trim().equalsIgnoreCase("identity")) {
+            // RFC 9110, 15.5.16: refuse a coding the service does not decode, and say which it takes
+            ctx.header("Accept-Encoding", "identity");
+            throw new ApiException(ProblemType.UNSUPPORTED_MEDIA_TYPE, "send the body uncompressed, not with "
+                    + "Content-Encoding " + coding.trim());
         }
         // The long form: Context.contentLength() is an int, -1 for a declared length past 2 GiB.
         long length = ctx.req().getContentLengthLong();
         if (length > config.maxBodyBytes()) {
             throw tooLarge(config);
         }
-        byte[] body = ctx.bodyAsBytes();
+    }
+
+    /**
+     * The body, read in the request's admission place (see {@link AdmissionControl}); 413 past the
+     * limit, 408 when it stalls for the idle timeout or comes slower than the minimum rate
+     * ({@link HttpServerSettings#MIN_BODY_BYTES_PER_SECOND}).
+     */
+    static byte[] readBody(Context ctx, ServiceConfig config) {
+        byte[] body;
+        try {
+            body = ctx.bodyAsBytes();
+        } catch (Exception e) { // Javalin passes on the stream's IOException undeclared
+            if (timedOut(e)) {
+                throw new ApiException(ProblemType.REQUEST_TIMEOUT, "the body did not arrive in time: it stalled, or "
+                        + "came slower than " + HttpServerSettings.MIN_BODY_BYTES_PER_SECOND + " bytes a second");
+            }
+            throw e; // rethrown as it came: the other read failures are mapped in App
+        }
         if (body.length > config.maxBodyBytes()) {
             throw tooLarge(config);
         }
         return body;
+    }
+
+    /** Jetty fails a read that timed out, or came too slowly, with an IOException caused by a TimeoutException. */
+    private static boolean timedOut(Throwable e) {
+        for (Throwable t = e; t != null; t = t.getCause()) {
+            if (t instanceof TimeoutException) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static ApiException tooLarge(ServiceConfig config) {

@@ -31,15 +31,20 @@ final class Solver {
                 "Time inside the simulator per request: validation, solve, checks and write-up", "kind", "outcome");
     }
 
-    /** Solves a job, its field paths under {@code prefix} ("" when the job is the body). */
-    SimulationResult simulate(Job job, String prefix) {
-        return admission.run(() -> timed("simulation", () -> simulator.simulate(job, prefix),
+    /** A place for one request's solve, taken before its body is read (see {@link AdmissionControl}). */
+    AdmissionControl.Place admit() {
+        return admission.enter();
+    }
+
+    /** Solves a job in its request's place, its field paths under {@code prefix} ("" when the job is the body). */
+    SimulationResult simulate(AdmissionControl.Place place, Job job, String prefix) {
+        return place.compute(() -> timed("simulation", () -> simulator.simulate(job, prefix),
                 SimulationResult::verdict));
     }
 
-    /** The MES's release check of one batch. */
-    ReleaseAnswer release(ReleaseRequest request) {
-        return admission.run(() -> timed("release-check", () -> simulator.release(request),
+    /** The MES's release check of one batch, in its request's place. */
+    ReleaseAnswer release(AdmissionControl.Place place, ReleaseRequest request) {
+        return place.compute(() -> timed("release-check", () -> simulator.release(request),
                 answer -> answer.release() ? "release" : "hold"));
     }
 

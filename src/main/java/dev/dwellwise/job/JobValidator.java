@@ -216,10 +216,29 @@ public final class JobValidator extends FieldChecks {
         }
     }
 
+    /**
+     * Whether a name can go into the answer's reasons and the SVG chart as it stands: XML 1.0 allows
+     * no control character but tab and line breaks, an unpaired surrogate has no UTF-8 form, and a
+     * bidirectional override could make a report read other than it is. None has a place in a name.
+     */
+    private static boolean printable(String text) {
+        for (int i = 0; i < text.length(); ) {
+            int c = text.codePointAt(i);
+            if (Character.isISOControl(c) || Character.getType(c) == Character.SURROGATE
+                    || c >= 0x202A && c <= 0x202E || c >= 0x2066 && c <= 0x2069) {
+                return false;
+            }
+            i += Character.charCount(c);
+        }
+        return true;
+    }
+
     /** Validates one stage; returns the longest it may last (0 where that is invalid). */
     private double stage(Stage s, String p) {
         if (s.name() != null && (s.name().isBlank() || s.name().length() > 80)) {
             add(p + ".name", "must be 1 to 80 characters");
+        } else if (s.name() != null && !printable(s.name())) {
+            add(p + ".name", "must not hold control characters, unpaired surrogates or bidirectional-text controls");
         }
         if (required(s.airTemperatureC(), p + ".airTemperatureC")) {
             temperature(s.airTemperatureC(), p + ".airTemperatureC");

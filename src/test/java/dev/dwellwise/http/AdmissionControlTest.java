@@ -10,6 +10,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.TimeUnit;
+import java.util.function.Supplier;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
@@ -31,16 +32,16 @@ class AdmissionControlTest {
     void aSolveWaitsInTheQueueWhileTheWorkerIsBusyAndTheOneAfterItIsRefused() throws Exception {
         AdmissionControl admission = new AdmissionControl(1, 1, 5_000, registry);
         CountDownLatch computing = new CountDownLatch(1);
-        Future<String> first = callers.submit(() -> admission.run(() -> {
+        Future<String> first = callers.submit(() -> run(admission, () -> {
             computing.countDown();
             await(release);
             return "first";
         }));
         assertTrue(computing.await(5, TimeUnit.SECONDS));
-        Future<String> second = callers.submit(() -> admission.run(() -> "second"));
+        Future<String> second = callers.submit(() -> run(admission, () -> "second"));
         awaitWaiting(admission, 1);
 
-        ApiException refused = assertThrows(ApiException.class, () -> admission.run(() -> "third"));
+        ApiException refused = assertThrows(ApiException.class, () -> run(admission, () -> "third"));
         assertEquals(ProblemType.OVERLOADED, refused.type());
         assertEquals(1.0, registry.get("dwellwise.admission.rejected").counter().count());
 
@@ -55,23 +56,49 @@ class AdmissionControlTest {
     void aQueuedSolveThatGetsNoWorkerWithinTheWaitLimitIsRefused() throws Exception {
         AdmissionControl admission = new AdmissionControl(1, 1, 50, registry);
         CountDownLatch computing = new CountDownLatch(1);
-        callers.submit(() -> admission.run(() -> {
+        callers.submit(() -> run(admission, () -> {
             computing.countDown();
             await(release);
             return "held";
         }));
         assertTrue(computing.await(5, TimeUnit.SECONDS));
-        ApiException refused = assertThrows(ApiException.class, () -> admission.run(() -> "late"));
+        ApiException refused = assertThrows(ApiException.class, () -> run(admission, () -> "late"));
         assertEquals(ProblemType.OVERLOADED, refused.type());
     }
 
     @Test
     void aFailingSolveGivesItsPlacesBack() {
         AdmissionControl admission = new AdmissionControl(1, 0, 1_000, registry);
-        assertThrows(IllegalStateException.class, () -> admission.run(() -> {
+        assertThrows(IllegalStateException.class, () -> run(admission, () -> {
             throw new IllegalStateException("solver failed");
         }));
-        assertEquals("next", admission.run(() -> "next"));
+        assertEquals("next", run(admission, () -> "next"));
+    }
+
+    @Test
+    void aPlaceIsHeldFromEntrySoARequestReadingItsBodyTakesAQueuePlace() {
+        // a request takes its place before its body is read (SimulationRoutes): one still reading
+        // fills the queue as a waiting solve does
+        AdmissionControl admission = new AdmissionControl(1, 1, 1_000, registry);
+        try (AdmissionControl.Place reading = admission.enter();
+             AdmissionControl.Place alsoReading = admission.enter()) {
+            assertEquals(2, admission.waiting());
+            ApiException refused = assertThrows(ApiException.class, admission::enter);
+            assertEquals(ProblemType.OVERLOADED, refused.type());
+            alsoReading.close();
+            alsoReading.close(); // given back once, however often closed
+            assertEquals(1, admission.waiting());
+            assertEquals("computed", reading.compute(() -> "computed"));
+        }
+        assertEquals(0, admission.waiting());
+        assertEquals("next", run(admission, () -> "next"));
+    }
+
+    /** One request's way through: a place, then a worker. */
+    private static <T> T run(AdmissionControl admission, Supplier<T> solve) {
+        try (AdmissionControl.Place place = admission.enter()) {
+            return place.compute(solve);
+        }
     }
 
     /** Polls the gauge the metrics show until the expected number of solves wait (bounded). */

@@ -5,6 +5,7 @@ import static org.hamcrest.Matchers.equalTo;
 import static org.hamcrest.Matchers.is;
 import static org.hamcrest.Matchers.startsWith;
 
+import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
@@ -83,6 +84,25 @@ class BearerAuthTest {
         // a HEAD matches no route of its own (Javalin answers it from the GET route)
         Http.given(secured).head("/v1/materials").then().statusCode(401);
         Http.given(secured).header("Authorization", "Bearer " + TOKEN).head("/v1/materials").then().statusCode(200);
+    }
+
+    @Test
+    void aHeadOnTheOpenPathsNeedsNoToken() {
+        // load balancers and uptime checks often probe with HEAD
+        for (String path : BearerAuth.OPEN_PATHS) {
+            Http.given(secured).head(path).then().statusCode(200);
+        }
+        Http.given(secured).head("/metrics/").then().statusCode(200);
+    }
+
+    @Test
+    void twoAuthorizationHeadersAreRefusedRatherThanOnePicked() {
+        for (List<String> pair : List.of(List.of("Bearer " + TOKEN, "Bearer wrong-token-0123456789"),
+                List.of("Bearer wrong-token-0123456789", "Bearer " + TOKEN))) {
+            Http.given(secured).header("Authorization", pair.get(0)).header("Authorization", pair.get(1))
+                    .get("/v1/materials").then().statusCode(401)
+                    .header("WWW-Authenticate", equalTo("Bearer realm=\"dwellwise\", error=\"invalid_request\""));
+        }
     }
 
     @Test

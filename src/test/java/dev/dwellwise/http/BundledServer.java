@@ -35,6 +35,10 @@ final class BundledServer implements BeforeAllCallback, AfterAllCallback {
         return server.request(contract);
     }
 
+    int port() {
+        return server.port();
+    }
+
     Javalin app() {
         return server.app();
     }

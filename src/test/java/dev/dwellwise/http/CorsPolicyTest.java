@@ -62,7 +62,7 @@ class CorsPolicyTest {
                 .options("/v1/simulations").then()
                 .statusCode(204)
                 .header("Access-Control-Allow-Origin", equalTo(DASHBOARD))
-                .header("Access-Control-Allow-Methods", equalTo(CorsPolicy.ALLOWED_METHODS))
+                .header("Access-Control-Allow-Methods", equalTo("POST, OPTIONS"))
                 .header("Access-Control-Allow-Headers", equalTo(CorsPolicy.ALLOWED_HEADERS))
                 .header("Access-Control-Max-Age", equalTo(CorsPolicy.MAX_AGE_SECONDS));
     }
@@ -73,6 +73,24 @@ class CorsPolicyTest {
                 .header("Access-Control-Request-Method", "POST").options("/v1/simulations");
         assertEquals(204, response.statusCode());
         assertEquals(List.of(), corsHeaders(response));
+    }
+
+    @Test
+    void anOptionsNamesTheMethodsOfItsPath() {
+        Http.given(service).options("/v1/materials").then().statusCode(204)
+                .header("Allow", equalTo("GET, HEAD, OPTIONS"));
+        Http.given(service).options("/v1/materials/steel-1010").then().statusCode(204)
+                .header("Allow", equalTo("GET, HEAD, OPTIONS"));
+        Http.given(service).options("/v1/release-checks").then().statusCode(204)
+                .header("Allow", equalTo("POST, OPTIONS"));
+    }
+
+    @Test
+    void anOptionsOnAPathTheServiceDoesNotHaveIsA404Problem() {
+        Http.given(service).filter(Contract.responsesOnly()).header("Origin", DASHBOARD)
+                .header("Access-Control-Request-Method", "GET").options("/v1/nowhere").then()
+                .statusCode(404).contentType("application/problem+json")
+                .body("type", equalTo(ProblemType.NOT_FOUND.uri()));
     }
 
     @Test

@@ -34,7 +34,12 @@ public final class Http {
 
     /** Sends raw bytes, as a broken client would, and returns everything the server answers until it closes. */
     static String raw(RunningService service, String request) throws IOException {
-        try (Socket socket = new Socket("127.0.0.1", service.port())) {
+        return raw(service.port(), request);
+    }
+
+    /** {@link #raw(RunningService, String)} to a service on a loopback port. */
+    static String raw(int port, String request) throws IOException {
+        try (Socket socket = new Socket("127.0.0.1", port)) {
             socket.setSoTimeout(TIMEOUT_MILLIS);
             OutputStream out = socket.getOutputStream();
             out.write(request.getBytes(StandardCharsets.ISO_8859_1));

@@ -191,6 +191,12 @@ class HttpBadInputTest {
                 invalid("a sample spacing below 0.1 s names output.sampleSeconds", "output.sampleSeconds",
                         Jobs.with(job, "output.sampleSeconds", 0.01)),
                 invalid("an unknown model names model", "model", Jobs.with(job, "model", "finite-element")),
+                invalidBeyondSchema("a control character in a stage name names stages[0].name (XML, and so the "
+                        + "SVG chart, cannot hold it)", "stages[0].name", Jobs.with(job, "stages[0].name", "cure\u0001oven")),
+                invalidBeyondSchema("a bidirectional override in a stage name names stages[0].name", "stages[0].name",
+                        Jobs.with(job, "stages[0].name", "\u202Enevo eruc")),
+                new Case("an unpaired surrogate in a stage name names stages[0].name", 422, INVALID, "stages[0].name",
+                        post(Jobs.text(Jobs.with(job, "stages[0].name", "LONE")).replace("\"LONE\"", "\"\\ud800\""))),
                 invalid("a custom material without density names its densityKgPerM3", "part.material.densityKgPerM3",
                         Jobs.with(job, "part.material", Map.of("specificHeatJPerKgK", 460, "conductivityWPerMK", 50))),
                 invalid("a custom material with both a constant and a table names the table",
@@ -263,6 +269,36 @@ class HttpBadInputTest {
                 .statusCode(200)
                 .contentType("application/json")
                 .body("model.used", equalTo("slab"));
+    }
+
+    /** Headers a broken client sends, raw: REST Assured would not send them as they are. */
+    @Test
+    void aLoneSemicolonForAcceptOrContentTypeIsRefusedNotAnInternalError() throws Exception {
+        String job = Jobs.text(job());
+        for (String[] header : new String[][] {{"Accept: ;", "406"}, {"Accept: application/json, ;", "200"},
+                {"Accept: ;;", "406"}}) {
+            String answer = Http.raw(server.port(), "POST " + SIMULATIONS + " HTTP/1.1\r\nHost: x\r\n" + header[0]
+                    + "\r\nContent-Type: application/json\r\nContent-Length: " + job.length()
+                    + "\r\nConnection: close\r\n\r\n" + job);
+            assertTrue(answer.startsWith("HTTP/1.1 " + header[1] + " "), header[0] + ": " + answer);
+        }
+        String answer = Http.raw(server.port(), "POST " + SIMULATIONS + " HTTP/1.1\r\nHost: x\r\nContent-Type: ;"
+                + "\r\nContent-Length: 2\r\nConnection: close\r\n\r\n{}");
+        assertTrue(answer.startsWith("HTTP/1.1 415 "), answer);
+        assertTrue(answer.contains(ProblemType.UNSUPPORTED_MEDIA_TYPE.uri()), answer);
+    }
+
+    @Test
+    void aCompressedBodyIsRefusedWith415NamingTheCodingItTakes() {
+        for (String route : List.of(SIMULATIONS, "/v1/release-checks")) {
+            server.request(Contract.responsesOnly()).contentType("application/json").header("Content-Encoding", "gzip")
+                    .body("{}").post(route).then()
+                    .statusCode(415)
+                    .header("Accept-Encoding", equalTo("identity"))
+                    .body("type", equalTo(ProblemType.UNSUPPORTED_MEDIA_TYPE.uri()));
+        }
+        server.request(Contract.responsesOnly()).contentType("application/json").header("Content-Encoding", "identity")
+                .body(Jobs.text(job())).post(SIMULATIONS).then().statusCode(200);
     }
 
     @Test

@@ -66,6 +66,29 @@ class MetricsEndpointTest {
     }
 
     @Test
+    void anInventedMethodIsCountedAsOtherNotUnderItsOwnName() throws Exception {
+        // each made-up name would otherwise add a histogram: a scrape that grows without bound
+        String other = "http_server_requests_seconds_count{method=\"other\",route=\"unmatched\",status=\"405\"}";
+        double before = value(scrape(), other);
+        for (String method : List.of("FROBNICATE", "MX17QQQ")) {
+            String answer = Http.raw(service, method + " /health/live HTTP/1.1\r\nHost: x\r\nConnection: close\r\n\r\n");
+            assertTrue(answer.startsWith("HTTP/1.1 405 "), answer);
+        }
+        assertEquals(before + 2, awaitValue(other, before + 2));
+        String scrape = scrape();
+        assertEquals(-1, scrape.indexOf("FROBNICATE"));
+        assertEquals(-1, scrape.indexOf("MX17QQQ"));
+    }
+
+    @Test
+    void aHeadIsCountedUnderTheRouteOfItsGet() {
+        String series = "http_server_requests_seconds_count{method=\"HEAD\",route=\"/v1/materials/{id}\",status=\"200\"}";
+        double before = value(scrape(), series);
+        Http.given(service).head("/v1/materials/steel-1010").then().statusCode(200);
+        assertEquals(before + 1, awaitValue(series, before + 1));
+    }
+
+    @Test
     void theScrapeIsPrometheusTextWithTheJvmAndLatencyBuckets() {
         // a scrape is counted once it has completed, so the second one shows the first
         awaitValue("http_server_requests_seconds_count{method=\"GET\",route=\"/metrics\",status=\"200\"}", 1);

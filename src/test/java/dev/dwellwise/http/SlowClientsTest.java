@@ -1,0 +1,103 @@
+package dev.dwellwise.http;
+
+import static java.nio.charset.StandardCharsets.ISO_8859_1;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.InputStream;
+import java.net.Socket;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.Timeout;
+
+/**
+ * Clients that send their bodies slowly neither starve the probes nor hold a thread for long: a
+ * request takes its admission place before its body is read, so past the workers and the queue it
+ * gets 503 at once, and a body that trickles in below the minimum rate gets a 408 problem.
+ */
+@Timeout(30)
+class SlowClientsTest {
+
+    /** More than the HTTP threads of one worker and one queue place (1 + 1 + the headroom). */
+    private static final int CLIENTS = 1 + 1 + HttpServerSettings.HEADROOM_THREADS + 6;
+
+    @Test
+    void slowBodiesGet503Or408WhileTheProbesAreAnswered() throws Exception {
+        try (RunningService service = RunningService.start(Map.of(ServiceConfig.WORKER_THREADS, "1",
+                ServiceConfig.QUEUE_SIZE, "1"))) {
+            List<Socket> clients = new ArrayList<>();
+            try {
+                for (int i = 0; i < CLIENTS; i++) {
+                    Socket socket = new Socket("127.0.0.1", service.port());
+                    socket.setSoTimeout(Http.TIMEOUT_MILLIS);
+                    socket.getOutputStream().write(("POST /v1/simulations HTTP/1.1\r\nHost: x\r\nContent-Type: "
+                            + "application/json\r\nContent-Length: 4000\r\n\r\n{").getBytes(ISO_8859_1));
+                    clients.add(socket);
+                }
+                // every thread the slow bodies could take would leave the probe unanswered
+                Http.given(service).get("/health/live").then().statusCode(200);
+
+                for (int round = 0; round < 2; round++) { // a byte each 0.3 s: far below the minimum rate
+                    Thread.sleep(300);
+                    for (Socket client : clients) {
+                        try {
+                            client.getOutputStream().write(' ');
+                        } catch (IOException refusedAlready) {
+                            // a 503 may have closed the connection
+                        }
+                    }
+                }
+                int timedOut = 0;
+                for (Socket client : clients) {
+                    String answer = answerOf(client);
+                    if (answer.startsWith("HTTP/1.1 408 ")) {
+                        assertTrue(answer.contains(ProblemType.REQUEST_TIMEOUT.uri()), answer);
+                        assertTrue(answer.toLowerCase(Locale.ROOT)
+                                .contains("content-type: application/problem+json"), answer);
+                        timedOut++;
+                    } else {
+                        assertTrue(answer.startsWith("HTTP/1.1 503 ") && answer.contains(ProblemType.OVERLOADED.uri()),
+                                answer);
+                    }
+                }
+                // the worker's and the queue's places were held by the two that were read
+                assertEquals(2, timedOut);
+                Http.given(service).get("/health/live").then().statusCode(200);
+            } finally {
+                for (Socket client : clients) {
+                    client.close();
+                }
+            }
+        }
+    }
+
+    /** The status line and headers, and the body once the answer is complete or the connection closes. */
+    private static String answerOf(Socket client) throws IOException {
+        InputStream in = client.getInputStream();
+        ByteArrayOutputStream answer = new ByteArrayOutputStream();
+        byte[] buffer = new byte[4096];
+        long deadline = System.nanoTime() + Http.TIMEOUT_MILLIS * 1_000_000L;
+        while (System.nanoTime() < deadline) {
+            int read;
+            try {
+                read = in.read(buffer);
+            } catch (IOException reset) {
+                break; // the server closed after answering
+            }
+            if (read < 0) {
+                break;
+            }
+            answer.write(buffer, 0, read);
+            String text = answer.toString(ISO_8859_1);
+            if (text.contains("\r\n\r\n") && text.trim().endsWith("}")) {
+                break;
+            }
+        }
+        return answer.toString(ISO_8859_1);
+    }
+}
