@@ -51,6 +51,47 @@ class LumpedClosedFormTest {
         assertFollowsTheExponential(history, 7832 * 434 * 0.001 / 30, 1e-5);
     }
 
+    @Test
+    void aPlateExposedOnOneFaceHeatsWithTheTimeConstantOfItsFullThickness() {
+        // Lumped convection closed form theta/theta_i = exp(-t/tau), tau = rho c Lc / h with Lc = V / A_s
+        // (Incropera, Fundamentals of Heat and Mass Transfer, Eqs. 5.6-5.7 [M]): the same 2 mm plate as above
+        // with its back face insulated has Lc = L = 2 mm, so tau = 7832 x 434 x 0.002 / 30 = 226.606 s, twice
+        // REFERENCES.md section 2's 113.303 s [C], and 180 C is reached at tau ln 9 = 497.904 s [C] (two faces:
+        // 248.952 s).
+        ThermalPart part = Parts.plate(Parts.steel1010(), 0.002, 1, 0.0, 20);
+        ThermalProblem problem = Parts.problem(part, 5,
+                Parts.stage("bake", 200, 200, 30, new EndCondition.ColdestReaches(Physics.toKelvin(180)), 3600));
+        ThermalHistory history = StageRunner.run(problem, new LumpedModel());
+
+        double tau = 7832 * 434 * 0.002 / 30;
+        assertEquals(2 * 113.303, tau, 2e-3); // [C] REFERENCES.md section 2, doubled for one face
+        StageOutcome bake = history.stages().get(0);
+        assertEquals(StageEnd.REACHED, bake.ended());
+        assertEquals(497.904, bake.endSeconds(), SECONDS_TARGET); // [C] tau ln 9
+        assertEquals(tau * Math.log(9), bake.endSeconds(), 1e-5); // [C]; measured 5e-6 s, far inside the target
+        assertFollowsTheExponential(history, tau, 1e-6);
+    }
+
+    @Test
+    void aPlateExposedOnOneFaceRadiatesThroughThatFaceAlone() {
+        // Radiation-only lumped body, fixed surroundings: Bejan & Kraus (eds.), Heat Transfer Handbook (2003),
+        // Eq. 3.283 with eps sigma for sigma [F]; same as Incropera Eq. 5.18 [M]. The 2 mm plate of the two-face
+        // case with its back face insulated stores twice the heat per exposed area (rho c L, not rho c L / 2), so
+        // 293.15 K -> 453.15 K under 473.15 K surroundings takes 2 x 440.960 = 881.921 s (REFERENCES.md section 2 [C]).
+        ThermalPart part = Parts.plate(Parts.steel1010(), 0.002, 1, 0.9, 20);
+        ThermalProblem problem = Parts.problem(part, 10,
+                Parts.stage("radiant", 200, 200, 0, new EndCondition.ColdestReaches(453.15), 3600));
+        ThermalHistory history = StageRunner.run(problem, new LumpedModel());
+        assertEquals(2 * 440.960, history.stages().get(0).endSeconds(), SECONDS_TARGET); // [C] REFERENCES.md section 2
+        double[] time = history.series().timeSeconds();
+        double[] temp = history.series().meanK();
+        for (int i = 1; i < time.length; i++) {
+            // [F] Bejan & Kraus Eq. 3.283 with the capacity per exposed area of one face, rho c L
+            assertEquals(radiationTime(293.15, temp[i], 473.15, 0.9, 7832 * 434 * 0.002), time[i], 1e-4,
+                    "closed-form time of the sampled temperature " + temp[i]);
+        }
+    }
+
     /** Every sample on T = T_air - (T_air - T_i) e^(-t/tau) for 20 C into 200 C air. */
     private static void assertFollowsTheExponential(ThermalHistory history, double tau, double toleranceK) {
         double[] time = history.series().timeSeconds();
