@@ -169,6 +169,48 @@ class CureChecksTest {
         assertEquals(hottest, overBaked.value());
     }
 
+    @Test
+    void aSlabsEquivalentTimeMinimumIsJudgedAtItsColdestPointAndItsMaximumAtItsHottest() {
+        // The same 40 mm slab: its mid-plane lags the faces, so its history is worth less time at 180 C
+        // (E = 80 kJ/mol). A minimum halfway between the two points' figures fails on the coldest point's
+        // figure; a maximum there fails on the hottest point's.
+        Job thick = CureJobs.onSlab(job(20, CureJobs.equivalentTime(180, 80, 0, null), timed("bake", 200, 300, 1800)), 40);
+        CureReport figures = SIMULATOR.simulate(thick).cure();
+        double coldest = figures.coldest().equivalentSeconds();
+        double hottest = figures.hottest().equivalentSeconds();
+        assertTrue(hottest > coldest + 10, () -> "surface " + hottest + " s, core " + coldest + " s");
+        double between = (coldest + hottest) / 2;
+        CheckResult underCured = check(SIMULATOR.simulate(withCure(thick, CureJobs.equivalentTime(180, 80, between, null))),
+                CureChecks.EQUIVALENT_TIME);
+        assertEquals(CheckResult.FAIL, underCured.status(), underCured.detail());
+        assertEquals(coldest, underCured.value());
+        assertEquals(between, underCured.limit());
+        CheckResult overBaked = check(SIMULATOR.simulate(withCure(thick, CureJobs.equivalentTime(180, 80, 0, between))),
+                CureChecks.EQUIVALENT_TIME);
+        assertEquals(CheckResult.FAIL, overBaked.status(), overBaked.detail());
+        assertEquals(hottest, overBaked.value());
+        assertEquals(between, overBaked.limit());
+    }
+
+    @Test
+    void aSlabsDegreeOfCureMinimumIsJudgedAtItsColdestPoint() {
+        // The same slab with a slow nth-order cure (A = 2e5 /s, E = 80 kJ/mol, n = 1.6: k(190 C) = 1.9e-4 /s
+        // [C], so neither point is near full cure after 1,800 s) and a minimum degree halfway between the two
+        // points' degrees: under-cured at the lagging mid-plane, whatever the faces reached.
+        Job thick = CureJobs.onSlab(job(20, CureJobs.nthOrder(2.0e5, 80, 1.6, 0.0, null),
+                timed("bake", 200, 300, 1800)), 40);
+        CureReport figures = SIMULATOR.simulate(thick).cure();
+        double coldest = figures.coldest().degree();
+        double hottest = figures.hottest().degree();
+        assertTrue(hottest > coldest + 1e-3 && hottest < 0.99, () -> "surface " + hottest + ", core " + coldest);
+        double between = (coldest + hottest) / 2;
+        CheckResult underCured = check(SIMULATOR.simulate(withCure(thick, CureJobs.nthOrder(2.0e5, 80, 1.6, between,
+                null))), CureChecks.DEGREE);
+        assertEquals(CheckResult.FAIL, underCured.status(), underCured.detail());
+        assertEquals(coldest, underCured.value());
+        assertEquals(between, underCured.limit());
+    }
+
     private static Job withCure(Job job, Cure cure) {
         return new Job(job.part(), job.stages(), cure, job.limits(), job.model(), job.slabCells(), job.output());
     }
