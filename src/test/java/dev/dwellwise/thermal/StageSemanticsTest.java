@@ -266,6 +266,28 @@ class StageSemanticsTest {
     }
 
     @Test
+    void aLayeredWallsBiotNumberUsesTheSeriesConductivityOfItsLayers() {
+        // 2 mm of steel (k 63.9) with a 1 mm insulating layer (the invented test solid, k 0.6), both faces
+        // exposed, eps 0.9, heated to 180 C in 200 C air (h = 30) and surroundings. DESIGN.md "Biot number and
+        // radiation": Bi = (h + h_r,max) (L / faces) / k_eff with, for layers, k_eff = L / sum(t_i / k_i), the
+        // series thermal resistance of a plane wall (any heat-transfer textbook, e.g. Incropera ch. 3 [M]):
+        // 0.003 / (0.002 / 63.9 + 0.001 / 0.6) = 1.7668 W/mK [C], where the arithmetic mean of the k would be 32.25.
+        ThermalPart part = new ThermalPart(List.of(new Layer(STEEL, 0.002), new Layer(Parts.testSolid(), 0.001)),
+                2, 0.9, K + 20);
+        StageOutcome s = run(part, 10,
+                Parts.stage("bake", 200, 200, 30, new EndCondition.ColdestReaches(453.15), 3600)).stages().get(0);
+        // h_r = eps sigma (T + Tsur)(T^2 + Tsur^2) at the end, 453.15 K against 473.15 K (Incropera Eq. 1.9 [M]),
+        // written out here: 20.290 W/m2K, REFERENCES.md section 2 [C]
+        double hr = 0.9 * 5.670374419e-8 * (453.15 + 473.15) * (453.15 * 453.15 + 473.15 * 473.15);
+        assertEquals(20.290, hr, 5e-4);
+        assertEquals(hr, s.largestRadiationCoefficient(), 1e-6);
+        double kEffective = 0.003 / (0.002 / 63.9 + 0.001 / 0.6);
+        assertEquals(1.7668, kEffective, 1e-4); // [C] series resistance
+        double expected = (30 + hr) * (0.003 / 2) / kEffective; // [C] 0.042695
+        assertEquals(expected, s.biotNumber(), 1e-6 * expected);
+    }
+
+    @Test
     void thePeakInsideARampDownIsFoundBetweenSamples() {
         // the air falls through the part's temperature mid-stage: the part peaks where T = T_air,
         // between steps; the peak must exceed every sample and the stage ends
