@@ -7,6 +7,7 @@ import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.params.provider.ValueSource;
 
 /**
@@ -18,22 +19,28 @@ class LumpedClosedFormTest {
     private static final double KELVIN_TARGET = 0.01;
     private static final double SECONDS_TARGET = 0.05;
 
-    @Test
-    void convectionOnlyHeatingFollowsTheExponentialAndReachesTheTargetAtTauLnNine() {
-        // Lumped convection closed form theta/theta_i = exp(-t/tau), tau = rho c Lc / h
-        // (Incropera, Fundamentals of Heat and Mass Transfer, Eqs. 5.6-5.7 [M]). REFERENCES.md section 2 [C]:
-        // steel 7832 kg/m3, 434 J/kgK, Lc = 1 mm, h = 30 -> tau = 113.303 s; 20 C in 200 C air to 180 C at tau ln 9 = 248.952 s.
-        ThermalPart part = Parts.plate(Parts.steel1010(), 0.002, 2, 0.0, 20);
+    /**
+     * Lumped convection closed form theta/theta_i = exp(-t/tau), tau = rho c Lc / h with Lc = V / A_s
+     * (Incropera, Fundamentals of Heat and Mass Transfer, Eqs. 5.6-5.7 [M]). REFERENCES.md section 2 [C]:
+     * steel 7832 kg/m3, 434 J/kgK, a 2 mm plate, h = 30, 20 C in 200 C air to 180 C at tau ln 9. Two
+     * exposed faces: Lc = 1 mm, tau = 113.303 s, 248.952 s. One face (back insulated): Lc = 2 mm,
+     * tau = 226.606 s, 497.904 s [C].
+     */
+    @ParameterizedTest(name = "{0} exposed face(s)")
+    @CsvSource({"2, 113.303, 248.952", "1, 226.606, 497.904"})
+    void convectionOnlyHeatingFollowsTheExponentialAndReachesTheTargetAtTauLnNine(int faces, double expectedTau,
+                                                                                   double expectedSeconds) {
+        ThermalPart part = Parts.plate(Parts.steel1010(), 0.002, faces, 0.0, 20);
         ThermalProblem problem = Parts.problem(part, 5,
                 Parts.stage("bake", 200, 200, 30, new EndCondition.ColdestReaches(Physics.toKelvin(180)), 3600));
         ThermalHistory history = StageRunner.run(problem, new LumpedModel());
 
-        double tau = 7832 * 434 * 0.001 / 30;
-        assertEquals(113.303, tau, 1e-3);
+        double tau = 7832 * 434 * (0.002 / faces) / 30;
+        assertEquals(expectedTau, tau, 1e-3);
         StageOutcome bake = history.stages().get(0);
         assertEquals(StageEnd.REACHED, bake.ended());
-        assertEquals(248.952, bake.endSeconds(), SECONDS_TARGET);
-        assertEquals(tau * Math.log(9), bake.endSeconds(), 1e-6);
+        assertEquals(expectedSeconds, bake.endSeconds(), SECONDS_TARGET);
+        assertEquals(tau * Math.log(9), bake.endSeconds(), 1e-5); // measured within 5e-6 s
         assertFollowsTheExponential(history, tau, KELVIN_TARGET);
         assertFollowsTheExponential(history, tau, 1e-6); // well inside the target
     }
@@ -49,27 +56,6 @@ class LumpedClosedFormTest {
                 Parts.stage("long soak", 200, 200, 30, new EndCondition.AfterDuration(20_000), 20_000));
         ThermalHistory history = StageRunner.run(problem, new LumpedModel());
         assertFollowsTheExponential(history, 7832 * 434 * 0.001 / 30, 1e-5);
-    }
-
-    @Test
-    void aPlateExposedOnOneFaceHeatsWithTheTimeConstantOfItsFullThickness() {
-        // Lumped convection closed form theta/theta_i = exp(-t/tau), tau = rho c Lc / h with Lc = V / A_s
-        // (Incropera, Fundamentals of Heat and Mass Transfer, Eqs. 5.6-5.7 [M]): the same 2 mm plate as above
-        // with its back face insulated has Lc = L = 2 mm, so tau = 7832 x 434 x 0.002 / 30 = 226.606 s, twice
-        // REFERENCES.md section 2's 113.303 s [C], and 180 C is reached at tau ln 9 = 497.904 s [C] (two faces:
-        // 248.952 s).
-        ThermalPart part = Parts.plate(Parts.steel1010(), 0.002, 1, 0.0, 20);
-        ThermalProblem problem = Parts.problem(part, 5,
-                Parts.stage("bake", 200, 200, 30, new EndCondition.ColdestReaches(Physics.toKelvin(180)), 3600));
-        ThermalHistory history = StageRunner.run(problem, new LumpedModel());
-
-        double tau = 7832 * 434 * 0.002 / 30;
-        assertEquals(2 * 113.303, tau, 2e-3); // [C] REFERENCES.md section 2, doubled for one face
-        StageOutcome bake = history.stages().get(0);
-        assertEquals(StageEnd.REACHED, bake.ended());
-        assertEquals(497.904, bake.endSeconds(), SECONDS_TARGET); // [C] tau ln 9
-        assertEquals(tau * Math.log(9), bake.endSeconds(), 1e-5); // [C]; measured 5e-6 s, far inside the target
-        assertFollowsTheExponential(history, tau, 1e-6);
     }
 
     @Test
