@@ -6,7 +6,6 @@ import java.util.List;
 import org.eclipse.jetty.server.HttpConfiguration;
 import org.eclipse.jetty.server.Server;
 import org.eclipse.jetty.server.handler.GracefulHandler;
-import org.eclipse.jetty.server.handler.MinimumDataRateHandler;
 import org.eclipse.jetty.util.thread.QueuedThreadPool;
 
 /** How Jetty is set up under Javalin: its thread pool, graceful stop, error pages, headers and compression. */
@@ -37,16 +36,16 @@ final class HttpServerSettings {
     static final int GZIP_LEVEL = 1;
 
     /**
-     * The slowest a request body may travel once it has started, bytes a second, as Jetty's
-     * {@link MinimumDataRateHandler} measures it: a client on the plant network sends a job of a few
-     * kilobytes in milliseconds, while one that trickles it holds a thread (and an admission place) for
-     * as long as it keeps a byte coming inside the idle timeout. At this rate the largest body the
-     * default limit allows (1 MiB) still has over four minutes.
+     * The slowest a request body may travel once it has started, bytes a second, as Jetty's servlet
+     * input measures it ({@link HttpConfiguration#setMinRequestDataRate}): a client on the plant
+     * network sends a job of a few kilobytes in milliseconds, while one that trickles it holds a thread
+     * (and an admission place) for as long as it keeps a byte coming inside the idle timeout. At this
+     * rate the largest body the default limit allows (1 MiB) still has over four minutes.
      * <p>
-     * Answers have no minimum rate: Jetty gives an answer sent in one write length/rate to finish
-     * (4.4 ms for a probe's 18 bytes at this rate), and a cold JVM or a descheduled thread on a loaded
-     * node takes longer, which cut the body off a first readiness answer. A client that stops reading
-     * holds its thread, not an admission place, until the idle timeout.
+     * Answers have no minimum rate. Jetty's handler for both rates gave an answer sent in one write
+     * length/rate to finish (4.4 ms for a probe's 18 bytes), less than a cold JVM or a descheduled
+     * thread on a loaded node takes, and cut the body off a first readiness answer. A client that
+     * stops reading holds its HTTP thread, not an admission place, until the idle timeout.
      */
     static final int MIN_BODY_BYTES_PER_SECOND = 4096;
 
@@ -81,7 +80,6 @@ final class HttpServerSettings {
      */
     static void configure(Server server, ServiceConfig config, ProblemErrorHandler errors, AccessLog access) {
         server.setStopTimeout(config.shutdownGraceSeconds() * 1000L);
-        server.insertHandler(new MinimumDataRateHandler(MIN_BODY_BYTES_PER_SECOND, 0));
         server.insertHandler(access);
         server.insertHandler(new GracefulHandler());
         server.setErrorHandler(errors);
@@ -90,5 +88,6 @@ final class HttpServerSettings {
     static void configure(HttpConfiguration http) {
         http.setSendServerVersion(false);
         http.setSendXPoweredBy(false);
+        http.setMinRequestDataRate(MIN_BODY_BYTES_PER_SECOND);
     }
 }

@@ -10,6 +10,8 @@ import io.javalin.http.Context;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
 import java.util.concurrent.TimeoutException;
+import org.eclipse.jetty.http.HttpException;
+import org.eclipse.jetty.http.HttpStatus;
 
 /** {@code POST /v1/simulations}: a job in, the result out as JSON or, on request, the series as CSV or an SVG chart. */
 final class SimulationRoutes {
@@ -110,10 +112,14 @@ final class SimulationRoutes {
         return body;
     }
 
-    /** Jetty fails a read that timed out, or came too slowly, with an IOException caused by a TimeoutException. */
+    /**
+     * Jetty fails a read that stalled with an IOException caused by a TimeoutException, and one that
+     * came too slowly with its own 408 exception.
+     */
     private static boolean timedOut(Throwable e) {
         for (Throwable t = e; t != null; t = t.getCause()) {
-            if (t instanceof TimeoutException) {
+            if (t instanceof TimeoutException
+                    || t instanceof HttpException http && http.getCode() == HttpStatus.REQUEST_TIMEOUT_408) {
                 return true;
             }
         }

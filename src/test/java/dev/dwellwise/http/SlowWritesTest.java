@@ -46,6 +46,7 @@ class SlowWritesTest {
             cfg.jetty.host = "127.0.0.1";
             cfg.jetty.port = 0;
             cfg.jetty.threadPool = threads;
+            cfg.jetty.modifyHttpConfiguration(HttpServerSettings::configure);
             cfg.jetty.modifyServer(server -> {
                 HttpServerSettings.configure(server, config, errors, access);
                 server.insertHandler(new DelayedWrites()); // outermost: the delay falls inside every write they make
