@@ -17,6 +17,12 @@ public final class SeriesSvg {
     private static final int RIGHT = 24;
     private static final int TOP = 44;
     private static final int BOTTOM = 48;
+    /**
+     * A chart is looked at, not parsed: it carries the answer's cautions in its description and this
+     * line where the eye falls, next to the verdict.
+     */
+    static final String SHORT_CAUTION = "Estimate: confirm with a logged part profile; hot parts burn (ISO 13732-1); "
+            + "oven safety per local codes";
     private static final String[] BAND_FILLS = {"#eef3f8", "#f8f3ea"};
 
     private SeriesSvg() {
@@ -48,6 +54,7 @@ public final class SeriesSvg {
                 .append(HEIGHT).append("\" viewBox=\"0 0 ").append(WIDTH).append(' ').append(HEIGHT)
                 .append("\" font-family=\"sans-serif\" font-size=\"12\">\n");
         out.append("<title>Part temperature history: verdict ").append(result.verdict()).append("</title>\n");
+        out.append("<desc>").append(escape(String.join(" ", result.cautions()))).append("</desc>\n");
         out.append("<rect width=\"100%\" height=\"100%\" fill=\"#ffffff\"/>\n");
         for (int i = 0; i < result.stages().size(); i++) {
             StageReport stage = result.stages().get(i);
@@ -71,6 +78,8 @@ public final class SeriesSvg {
         out.append("<text x=\"").append(LEFT).append("\" y=\"24\" font-size=\"15\" font-weight=\"bold\">")
                 .append("Part temperature, model ").append(escape(result.model().used())).append(", verdict ")
                 .append(escape(result.verdict())).append("</text>\n");
+        out.append("<text x=\"").append(WIDTH - RIGHT).append("\" y=\"24\" text-anchor=\"end\" font-size=\"11\" "
+                + "fill=\"#b3261e\">").append(SHORT_CAUTION).append("</text>\n");
         out.append("<text x=\"").append(WIDTH / 2).append("\" y=\"").append(HEIGHT - 10)
                 .append("\" text-anchor=\"middle\">time (s)</text>\n");
         out.append("<text x=\"16\" y=\"").append(HEIGHT / 2).append("\" text-anchor=\"middle\" transform=\"rotate(-90 16 ")

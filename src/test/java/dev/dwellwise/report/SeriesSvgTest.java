@@ -38,6 +38,17 @@ class SeriesSvgTest {
             assertTrue(svg.contains(">" + stage.name() + "<"), stage.name());
         }
         assertTrue(svg.contains("max part 200 °C") && svg.contains("handling 43 °C"));
+
+        // the chart carries the answer's cautions: all of them in its description, the gist in view
+        assertEquals(String.join(" ", result.cautions()),
+                doc.getElementsByTagName("desc").item(0).getTextContent());
+        boolean shown = false;
+        NodeList texts = doc.getElementsByTagName("text");
+        for (int i = 0; i < texts.getLength(); i++) {
+            shown |= texts.item(i).getTextContent().equals(SeriesSvg.SHORT_CAUTION);
+        }
+        assertTrue(shown, "the short caution is drawn");
+        assertTrue(SeriesSvg.SHORT_CAUTION.contains("ISO 13732-1") && SeriesSvg.SHORT_CAUTION.contains("local codes"));
         assertEquals(svg, SeriesSvg.render(services.simulator().simulate(job), job.limits()));
     }
 
