@@ -19,7 +19,7 @@ public final class SeriesSvg {
     private static final int BOTTOM = 48;
     /**
      * A chart is looked at, not parsed: it carries the answer's cautions in its description and this
-     * line where the eye falls, next to the verdict.
+     * line where the eye falls, under the verdict.
      */
     static final String SHORT_CAUTION = "Estimate: confirm with a logged part profile; hot parts burn (ISO 13732-1); "
             + "oven safety per local codes";
@@ -78,8 +78,8 @@ public final class SeriesSvg {
         out.append("<text x=\"").append(LEFT).append("\" y=\"24\" font-size=\"15\" font-weight=\"bold\">")
                 .append("Part temperature, model ").append(escape(result.model().used())).append(", verdict ")
                 .append(escape(result.verdict())).append("</text>\n");
-        out.append("<text x=\"").append(WIDTH - RIGHT).append("\" y=\"24\" text-anchor=\"end\" font-size=\"11\" "
-                + "fill=\"#b3261e\">").append(SHORT_CAUTION).append("</text>\n");
+        out.append("<text x=\"").append(LEFT).append("\" y=\"38\" font-size=\"11\" fill=\"#b3261e\">")
+                .append(SHORT_CAUTION).append("</text>\n");
         out.append("<text x=\"").append(WIDTH / 2).append("\" y=\"").append(HEIGHT - 10)
                 .append("\" text-anchor=\"middle\">time (s)</text>\n");
         out.append("<text x=\"16\" y=\"").append(HEIGHT / 2).append("\" text-anchor=\"middle\" transform=\"rotate(-90 16 ")
