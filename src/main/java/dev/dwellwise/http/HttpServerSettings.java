@@ -36,11 +36,11 @@ final class HttpServerSettings {
     static final int GZIP_LEVEL = 1;
 
     /**
-     * The slowest a request body may travel once it has started, bytes a second, as Jetty's servlet
-     * input measures it ({@link HttpConfiguration#setMinRequestDataRate}): a client on the plant
-     * network sends a job of a few kilobytes in milliseconds, while one that trickles it holds a thread
-     * (and an admission place) for as long as it keeps a byte coming inside the idle timeout. At this
-     * rate the largest body the default limit allows (1 MiB) still has over four minutes.
+     * The slowest a request body may travel on average once it has been arriving for
+     * {@link #BODY_GRACE_MILLIS}, bytes a second ({@link BodyRateGuard}): a client on the plant network
+     * sends a job of a few kilobytes in milliseconds, while one that trickles it holds a thread (and an
+     * admission place) for as long as it keeps a byte coming inside the idle timeout. At this rate the
+     * largest body the default limit allows (1 MiB) still has over four minutes.
      * <p>
      * Answers have no minimum rate. Jetty's handler for both rates gave an answer sent in one write
      * length/rate to finish (4.4 ms for a probe's 18 bytes), less than a cold JVM or a descheduled
@@ -48,6 +48,12 @@ final class HttpServerSettings {
      * stops reading holds its HTTP thread, not an admission place, until the idle timeout.
      */
     static final int MIN_BODY_BYTES_PER_SECOND = 4096;
+    /**
+     * How long a body may take before its average rate is judged: pauses in a small job's arrival
+     * (a retransmission, a delayed acknowledgement, a client's own stall) add up to well under this,
+     * while a trickle gets no further than a few seconds.
+     */
+    static final int BODY_GRACE_MILLIS = 2000;
 
     private HttpServerSettings() {
     }
@@ -80,6 +86,7 @@ final class HttpServerSettings {
      */
     static void configure(Server server, ServiceConfig config, ProblemErrorHandler errors, AccessLog access) {
         server.setStopTimeout(config.shutdownGraceSeconds() * 1000L);
+        server.insertHandler(new BodyRateGuard(MIN_BODY_BYTES_PER_SECOND, BODY_GRACE_MILLIS));
         server.insertHandler(access);
         server.insertHandler(new GracefulHandler());
         server.setErrorHandler(errors);
@@ -88,6 +95,5 @@ final class HttpServerSettings {
     static void configure(HttpConfiguration http) {
         http.setSendServerVersion(false);
         http.setSendXPoweredBy(false);
-        http.setMinRequestDataRate(MIN_BODY_BYTES_PER_SECOND);
     }
 }

@@ -10,8 +10,6 @@ import io.javalin.http.Context;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
 import java.util.concurrent.TimeoutException;
-import org.eclipse.jetty.http.HttpException;
-import org.eclipse.jetty.http.HttpStatus;
 
 /** {@code POST /v1/simulations}: a job in, the result out as JSON or, on request, the series as CSV or an SVG chart. */
 final class SimulationRoutes {
@@ -93,7 +91,7 @@ final class SimulationRoutes {
     /**
      * The body, read in the request's admission place (see {@link AdmissionControl}); 413 past the
      * limit, 408 when it stalls for the idle timeout or comes slower than the minimum rate
-     * ({@link HttpServerSettings#MIN_BODY_BYTES_PER_SECOND}).
+     * ({@link BodyRateGuard}).
      */
     static byte[] readBody(Context ctx, ServiceConfig config) {
         byte[] body;
@@ -102,7 +100,8 @@ final class SimulationRoutes {
         } catch (Exception e) { // Javalin passes on the stream's IOException undeclared
             if (timedOut(e)) {
                 throw new ApiException(ProblemType.REQUEST_TIMEOUT, "the body did not arrive in time: it stalled, or "
-                        + "came slower than " + HttpServerSettings.MIN_BODY_BYTES_PER_SECOND + " bytes a second");
+                        + "averaged under " + HttpServerSettings.MIN_BODY_BYTES_PER_SECOND + " bytes a second after "
+                        + HttpServerSettings.BODY_GRACE_MILLIS / 1000 + " s");
             }
             throw e; // rethrown as it came: the other read failures are mapped in App
         }
@@ -113,13 +112,12 @@ final class SimulationRoutes {
     }
 
     /**
-     * Jetty fails a read that stalled with an IOException caused by a TimeoutException, and one that
-     * came too slowly with its own 408 exception.
+     * Jetty fails a read that stalled, and {@link BodyRateGuard} one that came too slowly, with an
+     * IOException caused by a TimeoutException.
      */
     private static boolean timedOut(Throwable e) {
         for (Throwable t = e; t != null; t = t.getCause()) {
-            if (t instanceof TimeoutException
-                    || t instanceof HttpException http && http.getCode() == HttpStatus.REQUEST_TIMEOUT_408) {
+            if (t instanceof TimeoutException) {
                 return true;
             }
         }

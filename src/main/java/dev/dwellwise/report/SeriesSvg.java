@@ -6,8 +6,9 @@ import java.util.List;
 
 /**
  * The history as an SVG chart for the dashboard: temperature against time, the stages as bands,
- * the limits as dashed lines, the verdict in the title. Plain SVG 1.1 with no scripts or external
- * references, written with fixed-precision numbers so the same result gives the same bytes.
+ * the limits as dashed lines, the verdict in the title with the answer's cautions under it. Plain
+ * SVG 1.1 with no scripts or external references, written with fixed-precision numbers so the same
+ * result gives the same bytes.
  */
 public final class SeriesSvg {
 
@@ -21,8 +22,8 @@ public final class SeriesSvg {
      * A chart is looked at, not parsed: it carries the answer's cautions in its description and this
      * line where the eye falls, under the verdict.
      */
-    static final String SHORT_CAUTION = "Estimate: confirm with a logged part profile; hot parts burn (ISO 13732-1); "
-            + "oven safety per local codes";
+    static final String SHORT_CAUTION = "Estimate: confirm with a logged part profile; the coating supplier's data "
+            + "governs cure; hot parts burn (ISO 13732-1); oven safety per local codes";
     private static final String[] BAND_FILLS = {"#eef3f8", "#f8f3ea"};
 
     private SeriesSvg() {
@@ -79,7 +80,7 @@ public final class SeriesSvg {
                 .append("Part temperature, model ").append(escape(result.model().used())).append(", verdict ")
                 .append(escape(result.verdict())).append("</text>\n");
         out.append("<text x=\"").append(LEFT).append("\" y=\"38\" font-size=\"11\" fill=\"#b3261e\">")
-                .append(SHORT_CAUTION).append("</text>\n");
+                .append(escape(SHORT_CAUTION)).append("</text>\n");
         out.append("<text x=\"").append(WIDTH / 2).append("\" y=\"").append(HEIGHT - 10)
                 .append("\" text-anchor=\"middle\">time (s)</text>\n");
         out.append("<text x=\"16\" y=\"").append(HEIGHT / 2).append("\" text-anchor=\"middle\" transform=\"rotate(-90 16 ")

@@ -19,6 +19,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.dwellwise.job.Example;
 import dev.dwellwise.job.ExampleLibrary;
 import dev.dwellwise.job.WireJson;
+import dev.dwellwise.report.Cautions;
 import dev.dwellwise.report.SeriesCsv;
 import io.restassured.response.Response;
 import java.util.List;
@@ -56,7 +57,8 @@ class HttpSimulationsTest {
                 .body("stages.ended", everyItem(oneOf("duration", "reached", "hold-complete", "max-seconds")))
                 .body("checks.name", hasItem("model-validity"))
                 .body("provenance.inputSha256", matchesPattern("[0-9a-f]{64}"))
-                .body("cautions", SafetyCautions.named());
+                .body("cautions", SafetyCautions.named())
+                .body("cautions", hasSize(Cautions.ALL.size()));
     }
 
     @Test

@@ -93,6 +93,7 @@ class ReleaseChecksHttpTest {
                 .body("inputSha256", matchesPattern("[0-9a-f]{64}"))
                 .body("service", startsWith("dwellwise "))
                 .body("cautions", SafetyCautions.named())
+                .body("cautions", hasSize(Cautions.ALL.size()))
                 .body("$", not(hasKey("series")));
     }
 

@@ -14,6 +14,8 @@ import java.util.Locale;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
 
 /**
  * Clients that send their bodies slowly neither starve the probes nor hold a thread for long: a
@@ -42,7 +44,9 @@ class SlowClientsTest {
                 // every thread the slow bodies could take would leave the probe unanswered
                 Http.given(service).get("/health/live").then().statusCode(200);
 
-                for (int round = 0; round < 2; round++) { // a byte each 0.3 s: far below the minimum rate
+                // a byte each 0.3 s, far below the minimum rate, for longer than the grace period
+                long rounds = HttpServerSettings.BODY_GRACE_MILLIS / 300 + 2;
+                for (int round = 0; round < rounds; round++) {
                     Thread.sleep(300);
                     for (Socket client : clients) {
                         try {
@@ -73,6 +77,50 @@ class SlowClientsTest {
                     client.close();
                 }
             }
+        }
+    }
+
+    /**
+     * A small job that arrives in pieces with pauses between them (a retransmission, a delayed
+     * acknowledgement, a client's own stall) is answered, chunked or not: the rate is judged only
+     * after the grace period. Jetty's servlet-input rate check refused this 492-byte job after a
+     * 0.2 s pause (rate times time above the bytes so far, with no allowance).
+     */
+    @ParameterizedTest(name = "chunked {0}")
+    @ValueSource(booleans = {false, true})
+    void aSmallBodyWithPausesInsideTheGracePeriodIsAnswered(boolean chunked) throws Exception {
+        byte[] body = Workloads.PANEL.getBytes(java.nio.charset.StandardCharsets.UTF_8);
+        int third = body.length / 3;
+        try (RunningService service = RunningService.start(Map.of());
+                Socket client = new Socket("127.0.0.1", service.port())) {
+            client.setSoTimeout(Http.TIMEOUT_MILLIS);
+            client.setTcpNoDelay(true);
+            var out = client.getOutputStream();
+            out.write(("POST /v1/simulations HTTP/1.1\r\nHost: x\r\nContent-Type: application/json\r\n"
+                    + (chunked ? "Transfer-Encoding: chunked\r\n" : "Content-Length: " + body.length + "\r\n")
+                    + "Connection: close\r\n\r\n").getBytes(ISO_8859_1));
+            int[] cuts = {0, third, 2 * third, body.length};
+            for (int i = 0; i < 3; i++) {
+                byte[] piece = java.util.Arrays.copyOfRange(body, cuts[i], cuts[i + 1]);
+                if (chunked) {
+                    out.write((Integer.toHexString(piece.length) + "\r\n").getBytes(ISO_8859_1));
+                }
+                out.write(piece);
+                if (chunked) {
+                    out.write("\r\n".getBytes(ISO_8859_1));
+                }
+                out.flush();
+                if (i < 2) {
+                    Thread.sleep(HttpServerSettings.BODY_GRACE_MILLIS / 3); // two pauses: most of the grace
+                }
+            }
+            if (chunked) {
+                out.write("0\r\n\r\n".getBytes(ISO_8859_1));
+                out.flush();
+            }
+            String answer = new String(client.getInputStream().readAllBytes(), ISO_8859_1);
+            assertTrue(answer.startsWith("HTTP/1.1 200 "), answer);
+            assertTrue(answer.contains("\"verdict\":"), answer);
         }
     }
 

@@ -2,6 +2,7 @@ package dev.dwellwise.http;
 
 import static java.nio.charset.StandardCharsets.US_ASCII;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.dwellwise.job.WireJson;
 import io.javalin.Javalin;
@@ -12,6 +13,7 @@ import java.net.http.HttpResponse;
 import java.nio.ByteBuffer;
 import java.time.Duration;
 import java.util.Map;
+import java.util.concurrent.TimeUnit;
 import org.eclipse.jetty.server.Handler;
 import org.eclipse.jetty.server.Request;
 import org.eclipse.jetty.server.Response;
@@ -55,11 +57,14 @@ class SlowWritesTest {
         }).start();
         try {
             HttpClient client = HttpClient.newBuilder().version(HttpClient.Version.HTTP_1_1).build();
+            long start = System.nanoTime();
             HttpResponse<String> answer = client.send(HttpRequest.newBuilder(
                     URI.create("http://127.0.0.1:" + app.port() + "/health/ready"))
                     .timeout(Duration.ofSeconds(10)).build(), HttpResponse.BodyHandlers.ofString());
             assertEquals(200, answer.statusCode());
             assertEquals(new String(ANSWER, US_ASCII), answer.body());
+            assertTrue(System.nanoTime() - start >= TimeUnit.MILLISECONDS.toNanos(WRITE_DELAY_MILLIS),
+                    "the answer's write went through the delay");
         } finally {
             app.stop();
             metrics.close();
