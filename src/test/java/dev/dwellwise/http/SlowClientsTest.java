@@ -15,6 +15,7 @@ import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
 import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.params.provider.ValueSource;
 
 /**
@@ -121,6 +122,40 @@ class SlowClientsTest {
             String answer = new String(client.getInputStream().readAllBytes(), ISO_8859_1);
             assertTrue(answer.startsWith("HTTP/1.1 200 "), answer);
             assertTrue(answer.contains("\"verdict\":"), answer);
+        }
+    }
+
+    /**
+     * Past the grace period the body's average rate decides: a 16 KiB job (padded with whitespace)
+     * sent a KiB at a time over more than the grace period is answered at 6.8 KiB/s and refused at
+     * 2.6 KiB/s, either side of the 4 KiB/s minimum.
+     */
+    @ParameterizedTest(name = "a KiB every {0} ms gives {1}")
+    @CsvSource({"150, 200", "390, 408"})
+    void pastTheGracePeriodTheAverageRateDecides(long pauseMillis, int status) throws Exception {
+        StringBuilder padded = new StringBuilder(Workloads.PANEL);
+        while (padded.length() < 16 * 1024) {
+            padded.append(' ');
+        }
+        byte[] body = padded.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8);
+        try (RunningService service = RunningService.start(Map.of());
+                Socket client = new Socket("127.0.0.1", service.port())) {
+            client.setSoTimeout(Http.TIMEOUT_MILLIS);
+            client.setTcpNoDelay(true);
+            var out = client.getOutputStream();
+            out.write(("POST /v1/simulations HTTP/1.1\r\nHost: x\r\nContent-Type: application/json\r\n"
+                    + "Content-Length: " + body.length + "\r\nConnection: close\r\n\r\n").getBytes(ISO_8859_1));
+            try {
+                for (int from = 0; from < body.length; from += 1024) {
+                    out.write(body, from, Math.min(1024, body.length - from));
+                    out.flush();
+                    Thread.sleep(pauseMillis);
+                }
+            } catch (IOException refused) {
+                // the 408 closed the connection before the rest was sent
+            }
+            String answer = new String(client.getInputStream().readAllBytes(), ISO_8859_1);
+            assertTrue(answer.startsWith("HTTP/1.1 " + status + " "), answer);
         }
     }
 
