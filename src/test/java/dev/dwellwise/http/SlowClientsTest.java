@@ -1,14 +1,17 @@
 package dev.dwellwise.http;
 
 import static java.nio.charset.StandardCharsets.ISO_8859_1;
+import static java.nio.charset.StandardCharsets.UTF_8;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
+import java.io.OutputStream;
 import java.net.Socket;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -90,19 +93,14 @@ class SlowClientsTest {
     @ParameterizedTest(name = "chunked {0}")
     @ValueSource(booleans = {false, true})
     void aSmallBodyWithPausesInsideTheGracePeriodIsAnswered(boolean chunked) throws Exception {
-        byte[] body = Workloads.PANEL.getBytes(java.nio.charset.StandardCharsets.UTF_8);
+        byte[] body = Workloads.PANEL.getBytes(UTF_8);
         int third = body.length / 3;
         try (RunningService service = RunningService.start(Map.of());
-                Socket client = new Socket("127.0.0.1", service.port())) {
-            client.setSoTimeout(Http.TIMEOUT_MILLIS);
-            client.setTcpNoDelay(true);
-            var out = client.getOutputStream();
-            out.write(("POST /v1/simulations HTTP/1.1\r\nHost: x\r\nContent-Type: application/json\r\n"
-                    + (chunked ? "Transfer-Encoding: chunked\r\n" : "Content-Length: " + body.length + "\r\n")
-                    + "Connection: close\r\n\r\n").getBytes(ISO_8859_1));
+                Socket client = postHead(service, chunked ? "Transfer-Encoding: chunked" : "Content-Length: " + body.length)) {
+            OutputStream out = client.getOutputStream();
             int[] cuts = {0, third, 2 * third, body.length};
             for (int i = 0; i < 3; i++) {
-                byte[] piece = java.util.Arrays.copyOfRange(body, cuts[i], cuts[i + 1]);
+                byte[] piece = Arrays.copyOfRange(body, cuts[i], cuts[i + 1]);
                 if (chunked) {
                     out.write((Integer.toHexString(piece.length) + "\r\n").getBytes(ISO_8859_1));
                 }
@@ -137,14 +135,10 @@ class SlowClientsTest {
         while (padded.length() < 16 * 1024) {
             padded.append(' ');
         }
-        byte[] body = padded.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8);
+        byte[] body = padded.toString().getBytes(UTF_8);
         try (RunningService service = RunningService.start(Map.of());
-                Socket client = new Socket("127.0.0.1", service.port())) {
-            client.setSoTimeout(Http.TIMEOUT_MILLIS);
-            client.setTcpNoDelay(true);
-            var out = client.getOutputStream();
-            out.write(("POST /v1/simulations HTTP/1.1\r\nHost: x\r\nContent-Type: application/json\r\n"
-                    + "Content-Length: " + body.length + "\r\nConnection: close\r\n\r\n").getBytes(ISO_8859_1));
+                Socket client = postHead(service, "Content-Length: " + body.length)) {
+            OutputStream out = client.getOutputStream();
             try {
                 for (int from = 0; from < body.length; from += 1024) {
                     out.write(body, from, Math.min(1024, body.length - from));
@@ -157,6 +151,16 @@ class SlowClientsTest {
             String answer = new String(client.getInputStream().readAllBytes(), ISO_8859_1);
             assertTrue(answer.startsWith("HTTP/1.1 " + status + " "), answer);
         }
+    }
+
+    /** A connection with the head of a job's POST sent, the body framed as given, each write sent at once. */
+    private static Socket postHead(RunningService service, String framing) throws IOException {
+        Socket client = new Socket("127.0.0.1", service.port());
+        client.setSoTimeout(Http.TIMEOUT_MILLIS);
+        client.setTcpNoDelay(true);
+        client.getOutputStream().write(("POST /v1/simulations HTTP/1.1\r\nHost: x\r\nContent-Type: application/json\r\n"
+                + framing + "\r\nConnection: close\r\n\r\n").getBytes(ISO_8859_1));
+        return client;
     }
 
     /** The status line and headers, and the body once the answer is complete or the connection closes. */
