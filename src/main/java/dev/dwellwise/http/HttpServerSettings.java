@@ -51,7 +51,8 @@ final class HttpServerSettings {
     /**
      * How long a body may take before its average rate is judged: pauses in a small job's arrival
      * (a retransmission, a delayed acknowledgement, a client's own stall) add up to well under this,
-     * while a trickle gets no further than a few seconds.
+     * while a trickle below the rate is cut at its first piece after it (or at the idle timeout, if
+     * nothing more comes).
      */
     static final int BODY_GRACE_MILLIS = 2000;
 
