@@ -5,6 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import org.apache.commons.math3.analysis.UnivariateFunction;
+import org.apache.commons.math3.analysis.solvers.BisectionSolver;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -158,10 +160,10 @@ class StageSemanticsTest {
         StageOutcome hold = run(part, 10, rampUp).stages().get(0);
         double tau = 7832 * 434 * 0.001 / 30;
         double r = 200.0 / 1000;
-        java.util.function.DoubleUnaryOperator above = t ->
+        UnivariateFunction above = t ->
                 100 + r * (t - tau) + (200 - 100 + r * tau) * Math.exp(-t / tau) - 180;
         double coldest = tau * Math.log((200 - 100 + r * tau) / (r * tau)); // dT/dt = 0 [C]
-        assertTrue(above.applyAsDouble(coldest) < -40, "the closed form dips well below 180 C");
+        assertTrue(above.value(coldest) < -40, "the closed form dips well below 180 C");
         double t1 = bisect(above, 0, coldest);
         double t2 = bisect(above, coldest, 1000);
         assertTrue(t1 > 20, "a first spell worth telling apart: " + t1 + " s");
@@ -186,18 +188,12 @@ class StageSemanticsTest {
         assertEquals(tau * Math.log(2), hold.holdSecondsAccumulated(), 1e-4); // [C]; lumped target 0.05 s
     }
 
-    /** A root of {@code f} in [lo, hi], where f changes sign, to the last bit (the tests' own, not the solver's). */
-    private static double bisect(java.util.function.DoubleUnaryOperator f, double lo, double hi) {
-        boolean lowPositive = f.applyAsDouble(lo) > 0;
-        for (int i = 0; i < 200; i++) {
-            double mid = 0.5 * (lo + hi);
-            if ((f.applyAsDouble(mid) > 0) == lowPositive) {
-                lo = mid;
-            } else {
-                hi = mid;
-            }
-        }
-        return 0.5 * (lo + hi);
+    /**
+     * A root of {@code f} in [lo, hi], where f changes sign, by Commons Math's bisection: a different
+     * method from the Brent solver the service places its events with.
+     */
+    private static double bisect(UnivariateFunction f, double lo, double hi) {
+        return new BisectionSolver(1e-12, 1e-12).solve(200, f, lo, hi);
     }
 
     @Test
