@@ -4,6 +4,7 @@ import static dev.dwellwise.report.CureJobs.check;
 import static dev.dwellwise.report.CureJobs.job;
 import static dev.dwellwise.report.CureJobs.tau;
 import static dev.dwellwise.report.CureJobs.timed;
+import static dev.dwellwise.report.CureJobs.withLimits;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -21,10 +22,6 @@ import org.junit.jupiter.api.Test;
 class ChecksTest {
 
     private static final Simulator SIMULATOR = CureJobs.simulator();
-
-    private static Job withLimits(Job job, Limits limits) {
-        return new Job(job.part(), job.stages(), job.cure(), limits, job.model(), job.slabCells(), job.output());
-    }
 
     /** The plate from 20 C in 200 C air at h = 30 for 300 s. */
     private static Job bake(Limits limits) {

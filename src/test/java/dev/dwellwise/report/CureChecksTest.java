@@ -6,6 +6,7 @@ import static dev.dwellwise.report.CureJobs.isothermal;
 import static dev.dwellwise.report.CureJobs.job;
 import static dev.dwellwise.report.CureJobs.tau;
 import static dev.dwellwise.report.CureJobs.timed;
+import static dev.dwellwise.report.CureJobs.withCure;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -211,9 +212,6 @@ class CureChecksTest {
         assertEquals(between, underCured.limit());
     }
 
-    private static Job withCure(Job job, Cure cure) {
-        return new Job(job.part(), job.stages(), cure, job.limits(), job.model(), job.slabCells(), job.output());
-    }
 
     @Test
     void aCureFigureBeyondItsBudgetIsAComputationErrorNotAVerdict() {

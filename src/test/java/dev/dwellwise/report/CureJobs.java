@@ -7,6 +7,7 @@ import dev.dwellwise.job.Cure;
 import dev.dwellwise.job.CureKinetics;
 import dev.dwellwise.job.Job;
 import dev.dwellwise.job.JobLimits;
+import dev.dwellwise.job.Limits;
 import dev.dwellwise.job.MaterialRef;
 import dev.dwellwise.job.Output;
 import dev.dwellwise.job.Part;
@@ -83,6 +84,16 @@ final class CureJobs {
         Stage s = stages.get(index);
         stages.set(index, timed(s.name(), s.airTemperatureC(), s.convectionWPerM2K(), seconds));
         return new Job(job.part(), stages, job.cure(), job.limits(), job.model(), job.slabCells(), job.output());
+    }
+
+    /** The same job judged against other limits. */
+    static Job withLimits(Job job, Limits limits) {
+        return new Job(job.part(), job.stages(), job.cure(), limits, job.model(), job.slabCells(), job.output());
+    }
+
+    /** The same job judged against another cure specification. */
+    static Job withCure(Job job, Cure cure) {
+        return new Job(job.part(), job.stages(), cure, job.limits(), job.model(), job.slabCells(), job.output());
     }
 
     static Cure timeAbove(double c, double min, Double max) {
