@@ -1,6 +1,5 @@
 package dev.dwellwise.http;
 
-import java.util.concurrent.TimeUnit;
 import java.util.concurrent.TimeoutException;
 import org.eclipse.jetty.io.Content;
 import org.eclipse.jetty.server.Handler;
@@ -19,12 +18,10 @@ import org.eclipse.jetty.util.Callback;
  */
 final class BodyRateGuard extends Handler.Wrapper {
 
-    private final long minBytesPerSecond;
-    private final long graceNanos;
+    private final MinimumRate rate;
 
-    BodyRateGuard(long minBytesPerSecond, long graceMillis) {
-        this.minBytesPerSecond = minBytesPerSecond;
-        this.graceNanos = TimeUnit.MILLISECONDS.toNanos(graceMillis);
+    BodyRateGuard(MinimumRate rate) {
+        this.rate = rate;
     }
 
     @Override
@@ -51,18 +48,13 @@ final class BodyRateGuard extends Handler.Wrapper {
             if (!demanded) {
                 demanded = true;
                 firstDemand = now;
-            } else if (tooSlow(now - firstDemand)) {
+            } else if (now - firstDemand > rate.allowedNanos(bytesRead)) {
                 refusal = Content.Chunk.from(new TimeoutException("the body came slower than "
-                        + minBytesPerSecond + " bytes a second"), true);
+                        + rate.bytesPerSecond() + " bytes a second"), true);
                 demandCallback.run();
                 return;
             }
             super.demand(demandCallback);
-        }
-
-        private boolean tooSlow(long elapsedNanos) {
-            return elapsedNanos > graceNanos
-                    && bytesRead < minBytesPerSecond * (double) elapsedNanos / TimeUnit.SECONDS.toNanos(1);
         }
 
         @Override

@@ -36,25 +36,27 @@ final class HttpServerSettings {
     static final int GZIP_LEVEL = 1;
 
     /**
-     * The slowest a request body may travel on average once it has been arriving for
-     * {@link #BODY_GRACE_MILLIS}, bytes a second ({@link BodyRateGuard}): a client on the plant network
-     * sends a job of a few kilobytes in milliseconds, while one that trickles it holds a thread (and an
-     * admission place) for as long as it keeps a byte coming inside the idle timeout. At this rate the
-     * largest body the default limit allows (1 MiB) still has over four minutes.
-     * <p>
-     * Answers have no minimum rate. Jetty's handler for both rates gave an answer sent in one write
-     * length/rate to finish (4.4 ms for a probe's 18 bytes), less than a cold JVM or a descheduled
-     * thread on a loaded node takes, and cut the body off a first readiness answer. A client that
-     * stops reading holds its HTTP thread, not an admission place, until the idle timeout.
+     * How long a body or an answer may take before its average rate is judged: pauses in a small job's
+     * arrival (a retransmission, a delayed acknowledgement, a client's own stall) add up to well under
+     * this, while a trickle below the rate is cut soon after it.
      */
-    static final int MIN_BODY_BYTES_PER_SECOND = 4096;
+    static final int GRACE_MILLIS = 2000;
+
     /**
-     * How long a body may take before its average rate is judged: pauses in a small job's arrival
-     * (a retransmission, a delayed acknowledgement, a client's own stall) add up to well under this,
-     * while a trickle below the rate is cut at its first piece after it (or at the idle timeout, if
-     * nothing more comes).
+     * The slowest a request body may travel on average once it has been arriving for
+     * {@link #GRACE_MILLIS} ({@link BodyRateGuard}): a client on the plant network sends a job of a few
+     * kilobytes in milliseconds, while one that trickles it holds a thread (and an admission place) for
+     * as long as it keeps a byte coming inside the idle timeout. At this rate the largest body the
+     * default limit allows (1 MiB) still has over four minutes.
      */
-    static final int BODY_GRACE_MILLIS = 2000;
+    static final MinimumRate BODY_RATE = new MinimumRate(4096, GRACE_MILLIS);
+    /**
+     * The slowest a client may read an answer, counting only the time the answer's writes wait for it
+     * ({@link AnswerRateGuard}): 256 kbit/s, far below any plant network or a remote dashboard's link.
+     * A summary fits the socket's buffers and is never judged; the largest series (about 3 MB at the
+     * default sample budget) has a minute and a half.
+     */
+    static final MinimumRate ANSWER_RATE = new MinimumRate(32 * 1024, GRACE_MILLIS);
 
     private HttpServerSettings() {
     }
@@ -83,11 +85,13 @@ final class HttpServerSettings {
      * A stop first closes the listening socket, then waits up to the grace period for the requests in
      * flight ({@link GracefulHandler} counts them), then stops; Javalin's stop() runs all of it. The
      * access log sits inside the graceful handler: a request refused while stopping never reaches it
-     * and is logged by the error handler.
+     * and is logged by the error handler. The rate guards sit inside the access log, so that a body or
+     * an answer they cut off is logged (408, 499) like one the client gave up on.
      */
     static void configure(Server server, ServiceConfig config, ProblemErrorHandler errors, AccessLog access) {
         server.setStopTimeout(config.shutdownGraceSeconds() * 1000L);
-        server.insertHandler(new BodyRateGuard(MIN_BODY_BYTES_PER_SECOND, BODY_GRACE_MILLIS));
+        server.insertHandler(new BodyRateGuard(BODY_RATE));
+        server.insertHandler(new AnswerRateGuard(ANSWER_RATE));
         server.insertHandler(access);
         server.insertHandler(new GracefulHandler());
         server.setErrorHandler(errors);

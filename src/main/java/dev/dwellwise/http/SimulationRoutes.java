@@ -100,8 +100,8 @@ final class SimulationRoutes {
         } catch (Exception e) { // Javalin passes on the stream's IOException undeclared
             if (timedOut(e)) {
                 throw new ApiException(ProblemType.REQUEST_TIMEOUT, "the body did not arrive in time: it stalled, or "
-                        + "averaged under " + HttpServerSettings.MIN_BODY_BYTES_PER_SECOND + " bytes a second after "
-                        + HttpServerSettings.BODY_GRACE_MILLIS / 1000 + " s");
+                        + "averaged under " + HttpServerSettings.BODY_RATE.bytesPerSecond() + " bytes a second after "
+                        + HttpServerSettings.BODY_RATE.graceMillis() / 1000 + " s");
             }
             throw e; // rethrown as it came: the other read failures are mapped in App
         }

@@ -49,7 +49,7 @@ class SlowClientsTest {
                 Http.given(service).get("/health/live").then().statusCode(200);
 
                 // a byte each 0.3 s, far below the minimum rate, for longer than the grace period
-                long rounds = HttpServerSettings.BODY_GRACE_MILLIS / 300 + 2;
+                long rounds = HttpServerSettings.GRACE_MILLIS / 300 + 2;
                 for (int round = 0; round < rounds; round++) {
                     Thread.sleep(300);
                     for (Socket client : clients) {
@@ -110,7 +110,7 @@ class SlowClientsTest {
                 }
                 out.flush();
                 if (i < 2) {
-                    Thread.sleep(HttpServerSettings.BODY_GRACE_MILLIS / 3); // two pauses: most of the grace
+                    Thread.sleep(HttpServerSettings.GRACE_MILLIS / 3); // two pauses: most of the grace
                 }
             }
             if (chunked) {

@@ -14,12 +14,17 @@ import java.nio.ByteBuffer;
 import java.time.Duration;
 import java.util.Map;
 import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.eclipse.jetty.server.Handler;
 import org.eclipse.jetty.server.Request;
 import org.eclipse.jetty.server.Response;
 import org.eclipse.jetty.util.Callback;
 import org.eclipse.jetty.util.thread.QueuedThreadPool;
-import org.junit.jupiter.api.Test;
+import org.eclipse.jetty.util.thread.Scheduler;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
 import org.junit.jupiter.api.Timeout;
 
 /**
@@ -28,7 +33,9 @@ import org.junit.jupiter.api.Timeout;
  * tens of milliseconds to run again, and a cold JVM loads classes on its first write; a CI run lost
  * the body of its first readiness answer that way (status and headers arrived, the 18 bytes did not)
  * while Jetty's minimum write rate was on, which gives a one-write answer length/rate to finish (4.4 ms
- * for 18 bytes at 4 KiB/s). Here a handler outside them holds every write back for 50 ms.
+ * for 18 bytes at 4 KiB/s). Here a handler outside them holds every write back for 50 ms: before
+ * passing it on, as a descheduled thread would, or by handing it on late from another thread, as a
+ * socket slow to take it would (the write then waits, and {@link AnswerRateGuard} watches it).
  */
 @Timeout(30)
 class SlowWritesTest {
@@ -36,8 +43,12 @@ class SlowWritesTest {
     private static final byte[] ANSWER = "{\"status\":\"ready\"}".getBytes(US_ASCII);
     private static final long WRITE_DELAY_MILLIS = 50;
 
-    @Test
-    void aSmallAnswerWhoseWriteIsDelayedArrivesWhole() throws Exception {
+    /** Writes that {@link DelayedWrites} handed on from another thread. */
+    private final AtomicInteger delays = new AtomicInteger();
+
+    @ParameterizedTest
+    @ValueSource(booleans = {false, true})
+    void aSmallAnswerWhoseWriteIsDelayedArrivesWhole(boolean completedLate) throws Exception {
         ServiceConfig config = RunningService.config(Map.of());
         QueuedThreadPool threads = HttpServerSettings.threadPool(config);
         ServiceMetrics metrics = new ServiceMetrics(threads);
@@ -51,8 +62,10 @@ class SlowWritesTest {
             cfg.jetty.modifyHttpConfiguration(HttpServerSettings::configure);
             cfg.jetty.modifyServer(server -> {
                 HttpServerSettings.configure(server, config, errors, access);
-                server.insertHandler(new DelayedWrites()); // outermost: the delay falls inside every write they make
+                server.insertHandler(new DelayedWrites(completedLate)); // outermost: the delay falls inside every write they make
             });
+            cfg.requestLogger.http(access::answered); // as App wires the access line
+            cfg.routes.before(access::begin);
             cfg.routes.get("/health/ready", ctx -> ctx.contentType(MediaTypes.JSON).result(ANSWER));
         }).start();
         try {
@@ -65,20 +78,54 @@ class SlowWritesTest {
             assertEquals(new String(ANSWER, US_ASCII), answer.body());
             assertTrue(System.nanoTime() - start >= TimeUnit.MILLISECONDS.toNanos(WRITE_DELAY_MILLIS),
                     "the answer's write went through the delay");
+            assertEquals(completedLate, delays.get() > 0, "the write was handed on late");
+            assertEquals("200", deliveredStatus(metrics), "counted as delivered, not cut off");
         } finally {
             app.stop();
             metrics.close();
         }
     }
 
-    /** Holds each write back before passing it on, as a descheduled thread would. */
-    private static final class DelayedWrites extends Handler.Wrapper {
+    /** The status the readiness answer was counted with once Jetty completed it (499 if it was cut off). */
+    private static String deliveredStatus(ServiceMetrics metrics) throws InterruptedException {
+        Pattern counted = Pattern.compile("http_server_requests_seconds_count\\{method=\"GET\",route=\"/health/ready\","
+                + "status=\"(\\d+)\"} 1(?:\\.0)?$", Pattern.MULTILINE);
+        for (int attempt = 0; attempt < 100; attempt++) {
+            Matcher m = counted.matcher(metrics.scrape());
+            if (m.find()) {
+                return m.group(1);
+            }
+            Thread.sleep(50);
+        }
+        return "not counted";
+    }
+
+    /**
+     * Holds each write back for {@link #WRITE_DELAY_MILLIS}: in the writing thread, or by returning at
+     * once and handing it on from the scheduler's thread then.
+     */
+    private final class DelayedWrites extends Handler.Wrapper {
+
+        private final boolean completedLate;
+
+        DelayedWrites(boolean completedLate) {
+            this.completedLate = completedLate;
+        }
 
         @Override
         public boolean handle(Request request, Response response, Callback callback) throws Exception {
+            Scheduler scheduler = request.getComponents().getScheduler();
             return super.handle(request, new Response.Wrapper(request, response) {
                 @Override
                 public void write(boolean last, ByteBuffer content, Callback written) {
+                    if (completedLate) {
+                        // handed on from another thread later: the write waits, and its bytes go out late
+                        scheduler.schedule(() -> {
+                            delays.incrementAndGet();
+                            super.write(last, content, written);
+                        }, WRITE_DELAY_MILLIS, TimeUnit.MILLISECONDS);
+                        return;
+                    }
                     try {
                         Thread.sleep(WRITE_DELAY_MILLIS);
                     } catch (InterruptedException e) {
