@@ -3,6 +3,7 @@ package dev.dwellwise.http;
 import java.nio.ByteBuffer;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.TimeoutException;
+import org.eclipse.jetty.io.EndPoint;
 import org.eclipse.jetty.server.Handler;
 import org.eclipse.jetty.server.Request;
 import org.eclipse.jetty.server.Response;
@@ -39,12 +40,17 @@ final class AnswerRateGuard extends Handler.Wrapper {
     /** Jetty allows one write at a time per answer: the next starts after the last one completed. */
     private final class GuardedAnswer extends Response.Wrapper {
 
+        /** Taken while the request is live: the timers run on the scheduler's thread. */
+        private final Scheduler scheduler;
+        private final EndPoint endPoint;
         private long bytesHanded;
         /** Time the completed writes waited; written where a write completes, maybe another thread. */
         private volatile long waitedNanos;
 
         GuardedAnswer(Request request, Response response) {
             super(request, response);
+            this.scheduler = request.getComponents().getScheduler();
+            this.endPoint = request.getConnectionMetaData().getConnection().getEndPoint();
         }
 
         @Override
@@ -55,50 +61,69 @@ final class AnswerRateGuard extends Handler.Wrapper {
             write.watchUnlessDone(rate.allowedNanos(bytesHanded) - waitedNanos);
         }
 
-        /** A write's callback that, while the write waits on the client, has a timer that cuts it off. */
+        /**
+         * A write's callback that, while the write waits on the client, has a timer that cuts it off.
+         * The write's completion and the timer settle it once, whichever comes first; a write that
+         * completes after the timer has closed the connection is reported failed, so that the answer
+         * is never taken for delivered and the closed connection never serves another request.
+         */
         private final class WatchedWrite extends Callback.Nested {
 
             private final long started = System.nanoTime();
-            private volatile boolean done;
-            private volatile Scheduler.Task timer;
+            private boolean settled;
+            private Scheduler.Task timer;
+            private TimeoutException cutOff;
 
             WatchedWrite(Callback callback) {
                 super(callback);
             }
 
-            void watchUnlessDone(long allowedNanos) {
-                if (done) {
+            synchronized void watchUnlessDone(long allowedNanos) {
+                if (settled) {
                     return; // taken at once: the usual case, and the only one for a small answer
                 }
                 long left = Math.max(0, allowedNanos - (System.nanoTime() - started));
-                Scheduler scheduler = getRequest().getComponents().getScheduler();
                 timer = scheduler.schedule(this::cutOffIfWaiting, left, TimeUnit.NANOSECONDS);
-                if (done) {
-                    timer.cancel(); // completed while the timer was being set
-                }
             }
 
             private void cutOffIfWaiting() {
-                if (!done) {
-                    // fails the waiting write, and through it the answer: the access line says 499
-                    getRequest().getConnectionMetaData().getConnection().getEndPoint().close(new TimeoutException(
-                            "the client read the answer slower than " + rate.bytesPerSecond() + " bytes a second"));
+                TimeoutException cut;
+                synchronized (this) {
+                    if (settled) {
+                        return;
+                    }
+                    settled = true;
+                    cut = cutOff = new TimeoutException("the client read the answer slower than "
+                            + rate.bytesPerSecond() + " bytes a second");
                 }
+                endPoint.close(cut); // fails the waiting write, and through it the answer: logged as 499
             }
 
-            private void finish() {
-                waitedNanos += System.nanoTime() - started; // one write at a time: no lost update
-                done = true;
-                Scheduler.Task set = timer;
+            /** Settles the write as completed; returns the cut-off instead when the timer came first. */
+            private TimeoutException finish() {
+                Scheduler.Task set;
+                synchronized (this) {
+                    waitedNanos += System.nanoTime() - started; // one write at a time: no lost update
+                    if (settled) {
+                        return cutOff;
+                    }
+                    settled = true;
+                    set = timer;
+                }
                 if (set != null) {
                     set.cancel();
                 }
+                return null;
             }
 
             @Override
             public void succeeded() {
-                finish();
-                super.succeeded();
+                TimeoutException cut = finish();
+                if (cut == null) {
+                    super.succeeded();
+                } else {
+                    super.failed(cut);
+                }
             }
 
             @Override
