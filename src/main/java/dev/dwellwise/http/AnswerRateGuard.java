@@ -17,12 +17,13 @@ import org.eclipse.jetty.util.thread.Scheduler;
  * and the idle timeout alone would let a client that reads a few bytes in every timeout hold it for
  * as long as a large series lasts; enough such clients would leave no thread for the probes.
  *
- * <p>Only waiting counts: a write that the socket takes at once (every answer that fits the
- * connection's buffers, whatever the client does) arms nothing, and the server's own time between
- * writes (a descheduled thread, a collection, a cold JVM) is never held against the client. That is
- * what Jetty's {@code MinimumDataRateHandler} got wrong for answers: it gave a one-write answer
- * length/rate to finish from the moment of writing, 4.4 ms for a probe's 18 bytes, and cut the body off
- * a first readiness answer on a loaded machine ({@code SlowWritesTest}).
+ * <p>Only waiting counts, from when the call that started a write has returned: a write that the
+ * socket takes at once (every answer that fits the connection's buffers, whatever the client does)
+ * arms nothing, and the server's own time inside and between writes (a descheduled thread, a
+ * collection, a cold JVM) is never held against the client. That is what Jetty's
+ * {@code MinimumDataRateHandler} got wrong for answers: it gave a one-write answer length/rate to
+ * finish from the moment of writing, 4.4 ms for a probe's 18 bytes, and cut the body off a first
+ * readiness answer on a loaded machine ({@code SlowWritesTest}).
  */
 final class AnswerRateGuard extends Handler.Wrapper {
 
@@ -44,7 +45,7 @@ final class AnswerRateGuard extends Handler.Wrapper {
         private final Scheduler scheduler;
         private final EndPoint endPoint;
         private long bytesHanded;
-        /** Time the completed writes waited; written where a write completes, maybe another thread. */
+        /** Time the completed writes waited on the client; written where a write completes, maybe another thread. */
         private volatile long waitedNanos;
 
         GuardedAnswer(Request request, Response response) {
@@ -69,7 +70,9 @@ final class AnswerRateGuard extends Handler.Wrapper {
          */
         private final class WatchedWrite extends Callback.Nested {
 
-            private final long started = System.nanoTime();
+            /** Whether, and since when, the write has waited: from when the call that started it returned. */
+            private boolean waiting;
+            private long waitingSince;
             private boolean settled;
             private Scheduler.Task timer;
             private TimeoutException cutOff;
@@ -82,8 +85,11 @@ final class AnswerRateGuard extends Handler.Wrapper {
                 if (settled) {
                     return; // taken at once: the usual case, and the only one for a small answer
                 }
-                long left = Math.max(0, allowedNanos - (System.nanoTime() - started));
-                timer = scheduler.schedule(this::cutOffIfWaiting, left, TimeUnit.NANOSECONDS);
+                // waiting starts now: the server's own time inside the call (a collection, a
+                // descheduled thread, a first write's class loading) is not the client's
+                waiting = true;
+                waitingSince = System.nanoTime();
+                timer = scheduler.schedule(this::cutOffIfWaiting, Math.max(0, allowedNanos), TimeUnit.NANOSECONDS);
             }
 
             private void cutOffIfWaiting() {
@@ -103,7 +109,9 @@ final class AnswerRateGuard extends Handler.Wrapper {
             private TimeoutException finish() {
                 Scheduler.Task set;
                 synchronized (this) {
-                    waitedNanos += System.nanoTime() - started; // one write at a time: no lost update
+                    if (waiting) {
+                        waitedNanos += System.nanoTime() - waitingSince; // one write at a time: no lost update
+                    }
                     if (settled) {
                         return cutOff;
                     }

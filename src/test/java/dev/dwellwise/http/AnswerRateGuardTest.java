@@ -13,11 +13,14 @@ import java.io.OutputStream;
 import java.net.InetSocketAddress;
 import java.net.Socket;
 import java.net.SocketException;
+import java.nio.ByteBuffer;
 import java.util.Arrays;
 import java.util.Map;
 import java.util.concurrent.ArrayBlockingQueue;
 import java.util.concurrent.BlockingQueue;
 import java.util.concurrent.TimeUnit;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.eclipse.jetty.http.HttpHeader;
 import org.eclipse.jetty.io.Content;
 import org.eclipse.jetty.server.Handler;
@@ -43,6 +46,8 @@ class AnswerRateGuardTest {
     private static final int ANSWER_BYTES = 1024 * 1024;
     private static final int PIECE_BYTES = 64 * 1024;
     private static final long SERVER_PAUSE_MILLIS = 2500;
+    private static final long STALL_IN_WRITE_MILLIS = 600;
+    private static final byte[] GET_KEEP_ALIVE = "GET /answer HTTP/1.1\r\nHost: 127.0.0.1\r\n\r\n".getBytes(US_ASCII);
 
     /** How each answer's writing ended on the server: "written", or the exception its write threw. */
     private final BlockingQueue<Object> outcomes = new ArrayBlockingQueue<>(4);
@@ -57,20 +62,20 @@ class AnswerRateGuardTest {
 
     @Test
     void aReaderThatKeepsUpGetsTheWholeAnswer() throws Exception {
-        int port = start(false);
+        int port = start(Stall.NONE);
         assertEquals(ANSWER_BYTES, bodyBytes(read(port, 0)));
         assertEquals("written", outcomes.poll(10, TimeUnit.SECONDS));
     }
 
     @Test
     void aTricklingReaderIsCutOffAndTheServerThreadFreed() throws Exception {
-        int port = start(false);
+        int port = start(Stall.NONE);
         long start = System.nanoTime();
         // 4 KiB every 100 ms, about 40 KiB/s: the whole answer would take 25 s
         byte[] received = read(port, 100);
         long seconds = TimeUnit.NANOSECONDS.toSeconds(System.nanoTime() - start);
         assertTrue(bodyBytes(received) < ANSWER_BYTES / 2, "cut off well before the end: " + bodyBytes(received));
-        // allowed: 2 s of waiting for 1 MiB at 512 KiB/s, then what the buffers still hold
+        // allowed: 0.5 s of waiting for the first pieces (the grace), then what the buffers still hold
         assertTrue(seconds < 12, "cut off after " + seconds + " s");
         assertInstanceOf(IOException.class, outcomes.poll(10, TimeUnit.SECONDS), "the blocked write failed");
     }
@@ -79,9 +84,39 @@ class AnswerRateGuardTest {
     void theServersOwnPauseBetweenWritesDoesNotCount() throws Exception {
         // half the answer, then a pause longer than the time allowed for all of it (2 s), then the rest:
         // judged on the time since the first write, a reader that keeps up would be cut off
-        int port = start(true);
+        int port = start(Stall.BETWEEN_WRITES);
         assertEquals(ANSWER_BYTES, bodyBytes(read(port, 0)));
         assertEquals("written", outcomes.poll(10, TimeUnit.SECONDS));
+    }
+
+    @Test
+    void theServersOwnStallInsideAWriteDoesNotCount() throws Exception {
+        // the first write stalls in the server (as a collection or a descheduled thread would) for
+        // longer than the 0.5 s its first piece is allowed: counted as waiting, it would cut off a
+        // reader that keeps up, and shrink what every later write is allowed
+        int port = start(Stall.INSIDE_FIRST_WRITE);
+        assertEquals(ANSWER_BYTES, bodyBytes(read(port, 0)));
+        assertEquals("written", outcomes.poll(10, TimeUnit.SECONDS));
+    }
+
+    @Test
+    void aWatchedAnswerThatArrivedLeavesItsConnectionToTheNextRequest() throws Exception {
+        // every piece waits on these small buffers, so each write has a timer; once the answer is
+        // in, none of them may close the kept-alive connection under the next request
+        int port = start(Stall.NONE);
+        try (Socket socket = smallBufferedSocket(port)) {
+            OutputStream out = socket.getOutputStream();
+            InputStream in = socket.getInputStream();
+            out.write(GET_KEEP_ALIVE);
+            out.flush();
+            assertEquals(ANSWER_BYTES, readAnswer(in));
+            assertEquals("written", outcomes.poll(10, TimeUnit.SECONDS));
+            Thread.sleep(RATE.allowedNanos(ANSWER_BYTES) / 1_000_000 + 500); // past every timer's time
+            out.write(GET_KEEP_ALIVE);
+            out.flush();
+            assertEquals(ANSWER_BYTES, readAnswer(in));
+            assertEquals("written", outcomes.poll(10, TimeUnit.SECONDS));
+        }
     }
 
     @Test
@@ -97,8 +132,11 @@ class AnswerRateGuardTest {
         }
     }
 
+    /** Where the server stalls of its own accord while it writes the answer. */
+    private enum Stall { NONE, BETWEEN_WRITES, INSIDE_FIRST_WRITE }
+
     /** Starts a server with the guard around a handler that writes the answer in pieces. */
-    private int start(boolean pauseHalfway) throws Exception {
+    private int start(Stall stall) throws Exception {
         server = new Server();
         ServerConnector connector = new ServerConnector(server);
         connector.setHost("127.0.0.1");
@@ -106,18 +144,54 @@ class AnswerRateGuardTest {
         connector.setAcceptedSendBufferSize(8 * 1024);
         server.addConnector(connector);
         AnswerRateGuard guard = new AnswerRateGuard(RATE);
-        guard.setHandler(new PiecewiseAnswer(pauseHalfway));
-        server.setHandler(guard);
+        guard.setHandler(new PiecewiseAnswer(stall == Stall.BETWEEN_WRITES));
+        if (stall == Stall.INSIDE_FIRST_WRITE) {
+            StalledFirstWrite stalled = new StalledFirstWrite();
+            stalled.setHandler(guard);
+            server.setHandler(stalled);
+        } else {
+            server.setHandler(guard);
+        }
         server.start();
         return connector.getLocalPort();
     }
 
+    private static Socket smallBufferedSocket(int port) throws IOException {
+        Socket socket = new Socket();
+        socket.setReceiveBufferSize(4 * 1024);
+        socket.connect(new InetSocketAddress("127.0.0.1", port), 5000);
+        socket.setSoTimeout(20_000);
+        return socket;
+    }
+
+    /** One answer on a kept-alive connection, read at full speed: its body's length, -1 if it ended early. */
+    private static int readAnswer(InputStream in) throws IOException {
+        StringBuilder head = new StringBuilder();
+        while (!head.toString().endsWith("\r\n\r\n")) {
+            int b = in.read();
+            if (b < 0) {
+                return -1;
+            }
+            head.append((char) b);
+        }
+        Matcher length = Pattern.compile("(?im)^content-length:\\s*(\\d+)").matcher(head);
+        assertTrue(length.find(), head.toString());
+        int expected = Integer.parseInt(length.group(1));
+        byte[] piece = new byte[4096];
+        int read = 0;
+        while (read < expected) {
+            int n = in.read(piece, 0, Math.min(piece.length, expected - read));
+            if (n < 0) {
+                return -1;
+            }
+            read += n;
+        }
+        return read;
+    }
+
     /** A GET of the answer on a socket with a small receive buffer, reading 4 KiB at a time. */
     private static byte[] read(int port, long pauseMillis) throws IOException, InterruptedException {
-        try (Socket socket = new Socket()) {
-            socket.setReceiveBufferSize(4 * 1024);
-            socket.connect(new InetSocketAddress("127.0.0.1", port), 5000);
-            socket.setSoTimeout(20_000);
+        try (Socket socket = smallBufferedSocket(port)) {
             OutputStream out = socket.getOutputStream();
             out.write("GET /answer HTTP/1.1\r\nHost: 127.0.0.1\r\nConnection: close\r\n\r\n".getBytes(US_ASCII));
             out.flush();
@@ -178,6 +252,30 @@ class AnswerRateGuardTest {
                 callback.failed(e);
             }
             return true;
+        }
+    }
+
+    /** Outside the guard: the first write of each answer stalls in the server before it goes on. */
+    private static final class StalledFirstWrite extends Handler.Wrapper {
+
+        @Override
+        public boolean handle(Request request, Response response, Callback callback) throws Exception {
+            return super.handle(request, new Response.Wrapper(request, response) {
+                private boolean first = true;
+
+                @Override
+                public void write(boolean last, ByteBuffer content, Callback written) {
+                    if (first) {
+                        first = false;
+                        try {
+                            Thread.sleep(STALL_IN_WRITE_MILLIS);
+                        } catch (InterruptedException e) {
+                            Thread.currentThread().interrupt();
+                        }
+                    }
+                    super.write(last, content, written);
+                }
+            }, callback);
         }
     }
 }
