@@ -81,15 +81,27 @@ final class AnswerRateGuard extends Handler.Wrapper {
                 super(callback);
             }
 
-            synchronized void watchUnlessDone(long allowedNanos) {
-                if (settled) {
-                    return; // taken at once: the usual case, and the only one for a small answer
+            void watchUnlessDone(long allowedNanos) {
+                synchronized (this) {
+                    if (settled) {
+                        return; // taken at once: the usual case, and the only one for a small answer
+                    }
+                    // waiting starts now: the server's own time inside the call (a collection, a
+                    // descheduled thread, a first write's class loading) is not the client's
+                    waiting = true;
+                    waitingSince = System.nanoTime();
                 }
-                // waiting starts now: the server's own time inside the call (a collection, a
-                // descheduled thread, a first write's class loading) is not the client's
-                waiting = true;
-                waitingSince = System.nanoTime();
-                timer = scheduler.schedule(this::cutOffIfWaiting, Math.max(0, allowedNanos), TimeUnit.NANOSECONDS);
+                // scheduled outside the lock, which a completion on a selector thread may be waiting for
+                Scheduler.Task set = scheduler.schedule(this::cutOffIfWaiting, Math.max(0, allowedNanos),
+                        TimeUnit.NANOSECONDS);
+                boolean completed;
+                synchronized (this) {
+                    timer = set;
+                    completed = settled && cutOff == null;
+                }
+                if (completed) {
+                    set.cancel(); // completed while the timer was being set
+                }
             }
 
             private void cutOffIfWaiting() {
@@ -130,6 +142,7 @@ final class AnswerRateGuard extends Handler.Wrapper {
                 if (cut == null) {
                     super.succeeded();
                 } else {
+                    endPoint.close(cut); // closed before the failure is told, whichever thread gets there first
                     super.failed(cut);
                 }
             }

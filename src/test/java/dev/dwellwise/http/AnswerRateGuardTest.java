@@ -81,6 +81,16 @@ class AnswerRateGuardTest {
     }
 
     @Test
+    void aReaderBelowTheRateIsCutOffThoughNoOneWriteWaitsOutTheGrace() throws Exception {
+        int port = start(Stall.NONE);
+        // 4 KiB every 15 ms, at most 270 KiB/s against 512 KiB/s: each 64 KiB piece waits about
+        // 0.25 s, under the 0.5 s grace, so only the answer's waiting added up shows the shortfall
+        byte[] received = read(port, 15);
+        assertTrue(bodyBytes(received) < ANSWER_BYTES / 2, "cut off well before the end: " + bodyBytes(received));
+        assertInstanceOf(IOException.class, outcomes.poll(10, TimeUnit.SECONDS), "the blocked write failed");
+    }
+
+    @Test
     void theServersOwnPauseBetweenWritesDoesNotCount() throws Exception {
         // half the answer, then a pause longer than the time allowed for all of it (2 s), then the rest:
         // judged on the time since the first write, a reader that keeps up would be cut off
