@@ -94,13 +94,13 @@ final class AnswerRateGuard extends Handler.Wrapper {
                 // scheduled outside the lock, which a completion on a selector thread may be waiting for
                 Scheduler.Task set = scheduler.schedule(this::cutOffIfWaiting, Math.max(0, allowedNanos),
                         TimeUnit.NANOSECONDS);
-                boolean completed;
+                boolean settledMeanwhile;
                 synchronized (this) {
                     timer = set;
-                    completed = settled && cutOff == null;
+                    settledMeanwhile = settled;
                 }
-                if (completed) {
-                    set.cancel(); // completed while the timer was being set
+                if (settledMeanwhile) {
+                    set.cancel(); // completed (or cut off) while the timer was being set
                 }
             }
 

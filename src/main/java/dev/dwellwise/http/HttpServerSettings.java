@@ -53,8 +53,8 @@ final class HttpServerSettings {
     /**
      * The slowest a client may read an answer, counting only the time the answer's writes wait for it
      * ({@link AnswerRateGuard}): 256 kbit/s, far below any plant network or a remote dashboard's link.
-     * A summary fits the socket's buffers and is never judged; a 3 MB series (a lumped job at the
-     * default sample budget gives 2.6 MB) has a minute and a half.
+     * A summary fits the socket's buffers and is never judged; a 3 MB series that waits has a minute
+     * and a half.
      */
     static final MinimumRate ANSWER_RATE = new MinimumRate(32 * 1024, GRACE_MILLIS);
 

@@ -48,7 +48,7 @@ class SlowWritesTest {
 
     @ParameterizedTest
     @ValueSource(booleans = {false, true})
-    void aSmallAnswerWhoseWriteIsDelayedArrivesWhole(boolean completedLate) throws Exception {
+    void aSmallAnswerWhoseWriteIsDelayedArrivesWhole(boolean handedOnLate) throws Exception {
         ServiceConfig config = RunningService.config(Map.of());
         QueuedThreadPool threads = HttpServerSettings.threadPool(config);
         ServiceMetrics metrics = new ServiceMetrics(threads);
@@ -62,7 +62,8 @@ class SlowWritesTest {
             cfg.jetty.modifyHttpConfiguration(HttpServerSettings::configure);
             cfg.jetty.modifyServer(server -> {
                 HttpServerSettings.configure(server, config, errors, access);
-                server.insertHandler(new DelayedWrites(completedLate)); // outermost: the delay falls inside every write they make
+                // outermost: the delay falls inside every write they make
+                server.insertHandler(new DelayedWrites(handedOnLate));
             });
             cfg.requestLogger.http(access::answered); // as App wires the access line
             cfg.routes.before(access::begin);
@@ -78,7 +79,7 @@ class SlowWritesTest {
             assertEquals(new String(ANSWER, US_ASCII), answer.body());
             assertTrue(System.nanoTime() - start >= TimeUnit.MILLISECONDS.toNanos(WRITE_DELAY_MILLIS),
                     "the answer's write went through the delay");
-            assertEquals(completedLate, delays.get() > 0, "the write was handed on late");
+            assertEquals(handedOnLate, delays.get() > 0, "the write was handed on late");
             assertEquals("200", deliveredStatus(metrics), "counted as delivered, not cut off");
         } finally {
             app.stop();
@@ -106,10 +107,10 @@ class SlowWritesTest {
      */
     private final class DelayedWrites extends Handler.Wrapper {
 
-        private final boolean completedLate;
+        private final boolean handedOnLate;
 
-        DelayedWrites(boolean completedLate) {
-            this.completedLate = completedLate;
+        DelayedWrites(boolean handedOnLate) {
+            this.handedOnLate = handedOnLate;
         }
 
         @Override
@@ -118,7 +119,7 @@ class SlowWritesTest {
             return super.handle(request, new Response.Wrapper(request, response) {
                 @Override
                 public void write(boolean last, ByteBuffer content, Callback written) {
-                    if (completedLate) {
+                    if (handedOnLate) {
                         // handed on from another thread later: the write waits, and its bytes go out late
                         scheduler.schedule(() -> {
                             delays.incrementAndGet();
