@@ -18,7 +18,8 @@ JAR="$ROOT/target/dwellwise.jar"
 BASE="http://127.0.0.1:$PORT"
 INSIDE=/run/dwellwise-pod
 WORK=$(mktemp -d)
-trap 'rm -rf "$WORK"' EXIT
+# the mount point is made on the machine's own /run (the tmpfs on it lives in the namespace only)
+trap 'rm -rf "$WORK"; rmdir "$INSIDE" 2>/dev/null || true' EXIT
 
 for tool in unshare setpriv python3 curl; do
   command -v "$tool" >/dev/null || { echo "run-as-pod.sh needs $tool" >&2; exit 2; }
