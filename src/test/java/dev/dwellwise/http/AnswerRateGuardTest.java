@@ -29,6 +29,7 @@ import org.eclipse.jetty.server.Response;
 import org.eclipse.jetty.server.Server;
 import org.eclipse.jetty.server.ServerConnector;
 import org.eclipse.jetty.util.Callback;
+import org.eclipse.jetty.util.thread.Scheduler;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
@@ -131,6 +132,15 @@ class AnswerRateGuardTest {
     }
 
     @Test
+    void aWriteReportedCompleteOnlyAfterTheCutEndsTheAnswerAsFailed() throws Exception {
+        // the last write's completion is reported 3 s late, past its allowance (2 s at most): by then
+        // the guard has closed the connection, so the answer must end failed, never as delivered
+        int port = start(Stall.LAST_COMPLETION_REPORTED_LATE);
+        read(port, 0);
+        assertInstanceOf(IOException.class, outcomes.poll(10, TimeUnit.SECONDS), "the late success was turned down");
+    }
+
+    @Test
     void theServiceHasBothGuardsInsideItsAccessLog() {
         Server configured = new Server();
         ServiceConfig config = RunningService.config(Map.of());
@@ -143,8 +153,8 @@ class AnswerRateGuardTest {
         }
     }
 
-    /** Where the server stalls of its own accord while it writes the answer. */
-    private enum Stall { NONE, BETWEEN_WRITES, INSIDE_FIRST_WRITE }
+    /** Where the server stalls of its own accord while it writes the answer, or Jetty reports late. */
+    private enum Stall { NONE, BETWEEN_WRITES, INSIDE_FIRST_WRITE, LAST_COMPLETION_REPORTED_LATE }
 
     /** Starts a server with the guard around a handler that writes the answer in pieces. */
     private int start(Stall stall) throws Exception {
@@ -156,10 +166,11 @@ class AnswerRateGuardTest {
         server.addConnector(connector);
         AnswerRateGuard guard = new AnswerRateGuard(RATE);
         guard.setHandler(new PiecewiseAnswer(stall == Stall.BETWEEN_WRITES));
-        if (stall == Stall.INSIDE_FIRST_WRITE) {
-            StalledFirstWrite stalled = new StalledFirstWrite();
-            stalled.setHandler(guard);
-            server.setHandler(stalled);
+        if (stall == Stall.INSIDE_FIRST_WRITE || stall == Stall.LAST_COMPLETION_REPORTED_LATE) {
+            Handler.Wrapper outside = stall == Stall.INSIDE_FIRST_WRITE ? new StalledFirstWrite()
+                    : new LateLastCompletion();
+            outside.setHandler(guard);
+            server.setHandler(outside);
         } else {
             server.setHandler(guard);
         }
@@ -286,6 +297,22 @@ class AnswerRateGuardTest {
                         }
                     }
                     super.write(last, content, written);
+                }
+            }, callback);
+        }
+    }
+
+    /** Outside the guard: the last write's success is reported 3 s after it happened. */
+    private static final class LateLastCompletion extends Handler.Wrapper {
+
+        @Override
+        public boolean handle(Request request, Response response, Callback callback) throws Exception {
+            Scheduler scheduler = request.getComponents().getScheduler();
+            return super.handle(request, new Response.Wrapper(request, response) {
+                @Override
+                public void write(boolean last, ByteBuffer content, Callback written) {
+                    super.write(last, content, !last ? written : Callback.from(
+                            () -> scheduler.schedule(written::succeeded, 3, TimeUnit.SECONDS), written::failed));
                 }
             }, callback);
         }
