@@ -2,6 +2,8 @@ package dev.dwellwise.http;
 
 import dev.dwellwise.thermal.ComputeBudget;
 import java.io.IOException;
+import java.net.InetAddress;
+import java.net.UnknownHostException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -53,6 +55,9 @@ public record ServiceConfig(String host, int port, int workerThreads, int queueS
     public static final long DEFAULT_MAX_BODY_BYTES = 1024 * 1024;
     public static final int DEFAULT_SHUTDOWN_GRACE_SECONDS = 20;
 
+    private static final String DEFAULT_HOST = "0.0.0.0";
+    /** The levels Logback knows by name. */
+    private static final List<String> LOG_LEVELS = List.of("ALL", "TRACE", "DEBUG", "INFO", "WARN", "ERROR", "OFF");
     private static final int MIN_TOKEN_LENGTH = 16;
     /** RFC 6750 b64token: what may follow "Bearer " in an Authorization header. */
     private static final Pattern TOKEN = Pattern.compile("[A-Za-z0-9\\-._~+/]+=*");
@@ -69,7 +74,8 @@ public record ServiceConfig(String host, int port, int workerThreads, int queueS
     }
 
     public static ServiceConfig fromEnvironment(Map<String, String> env) {
-        return new ServiceConfig(env.getOrDefault(HOST, "0.0.0.0").trim(),
+        checkLogLevel(env.get(LOG_LEVEL));
+        return new ServiceConfig(host(env.get(HOST)),
                 intSetting(env, PORT, DEFAULT_PORT, 0, 65_535),
                 intSetting(env, WORKER_THREADS, Runtime.getRuntime().availableProcessors(), 1, 256),
                 intSetting(env, QUEUE_SIZE, DEFAULT_QUEUE_SIZE, 0, 10_000),
@@ -130,6 +136,35 @@ public record ServiceConfig(String host, int port, int workerThreads, int queueS
             throw new IllegalArgumentException(name + " must be from " + min + " to " + max + ", not " + raw);
         }
         return value;
+    }
+
+    /**
+     * An address, or a name this machine resolves. Checked here because an unresolvable one would
+     * fail the start later, where Javalin reports every failure to bind as a port already in use.
+     */
+    private static String host(String raw) {
+        if (raw == null || raw.isBlank()) {
+            return DEFAULT_HOST;
+        }
+        String host = raw.trim();
+        try {
+            InetAddress.getByName(host);
+        } catch (UnknownHostException e) {
+            throw new IllegalArgumentException(HOST + " must be an address or a name this machine resolves, not '"
+                    + raw + "'", e);
+        }
+        return host;
+    }
+
+    /**
+     * Logback reads the level itself (logback.xml) and takes a word it does not know for DEBUG: a
+     * misspelt WARN would flood the log instead of quieting it.
+     */
+    private static void checkLogLevel(String raw) {
+        if (raw != null && !raw.isBlank() && !LOG_LEVELS.contains(raw.trim().toUpperCase(Locale.ROOT))) {
+            throw new IllegalArgumentException(LOG_LEVEL + " must be one of " + String.join(", ", LOG_LEVELS)
+                    + ", not '" + raw + "'");
+        }
     }
 
     private static List<String> origins(String raw) {

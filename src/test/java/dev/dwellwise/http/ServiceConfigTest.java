@@ -63,6 +63,27 @@ class ServiceConfigTest {
     }
 
     @Test
+    void aHostThatIsNeitherAnAddressNorAResolvableNameIsRefused() {
+        // before this check, Javalin reported the failed bind as a port already in use (exit 1)
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> ServiceConfig.fromEnvironment(Map.of("DWELLWISE_HOST", "not a host")));
+        assertTrue(e.getMessage().startsWith("DWELLWISE_HOST must be an address"), e.getMessage());
+        assertEquals("127.0.0.1", ServiceConfig.fromEnvironment(Map.of("DWELLWISE_HOST", " 127.0.0.1 ")).host());
+        assertEquals("0.0.0.0", ServiceConfig.fromEnvironment(Map.of("DWELLWISE_HOST", " ")).host());
+    }
+
+    @Test
+    void aLogLevelLogbackDoesNotKnowIsRefused() {
+        // Logback would take it for DEBUG: a misspelt WARN floods the log
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> ServiceConfig.fromEnvironment(Map.of("DWELLWISE_LOG_LEVEL", "WARNING")));
+        assertTrue(e.getMessage().startsWith("DWELLWISE_LOG_LEVEL must be one of"), e.getMessage());
+        for (String level : List.of("warn", "INFO", " error ", "OFF")) {
+            ServiceConfig.fromEnvironment(Map.of("DWELLWISE_LOG_LEVEL", level)); // accepted, as Logback takes them
+        }
+    }
+
+    @Test
     void anOriginWithAPathOrAWildcardIsRefused() {
         for (String bad : List.of("https://dash.plant.example/", "*", "dash.plant.example", "https://*.plant.example")) {
             IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
