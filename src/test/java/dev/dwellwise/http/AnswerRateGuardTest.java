@@ -13,7 +13,6 @@ import java.io.OutputStream;
 import java.net.InetSocketAddress;
 import java.net.Socket;
 import java.net.SocketException;
-import java.nio.ByteBuffer;
 import java.util.Arrays;
 import java.util.Map;
 import java.util.concurrent.ArrayBlockingQueue;
@@ -167,8 +166,9 @@ class AnswerRateGuardTest {
         AnswerRateGuard guard = new AnswerRateGuard(RATE);
         guard.setHandler(new PiecewiseAnswer(stall == Stall.BETWEEN_WRITES));
         if (stall == Stall.INSIDE_FIRST_WRITE || stall == Stall.LAST_COMPLETION_REPORTED_LATE) {
-            Handler.Wrapper outside = stall == Stall.INSIDE_FIRST_WRITE ? new StalledFirstWrite()
-                    : new LateLastCompletion();
+            // outside the guard, so that the guard's writes pass through it
+            InterceptedWrites outside = new InterceptedWrites(stall == Stall.INSIDE_FIRST_WRITE
+                    ? AnswerRateGuardTest::stalledFirstWrite : AnswerRateGuardTest::lateLastCompletion);
             outside.setHandler(guard);
             server.setHandler(outside);
         } else {
@@ -278,43 +278,22 @@ class AnswerRateGuardTest {
         }
     }
 
-    /** Outside the guard: the first write of each answer stalls in the server before it goes on. */
-    private static final class StalledFirstWrite extends Handler.Wrapper {
-
-        @Override
-        public boolean handle(Request request, Response response, Callback callback) throws Exception {
-            return super.handle(request, new Response.Wrapper(request, response) {
-                private boolean first = true;
-
-                @Override
-                public void write(boolean last, ByteBuffer content, Callback written) {
-                    if (first) {
-                        first = false;
-                        try {
-                            Thread.sleep(STALL_IN_WRITE_MILLIS);
-                        } catch (InterruptedException e) {
-                            Thread.currentThread().interrupt();
-                        }
-                    }
-                    super.write(last, content, written);
-                }
-            }, callback);
-        }
+    /** The first write of the answer stalls in the server before it goes on. */
+    private static InterceptedWrites.Write stalledFirstWrite(Request request, InterceptedWrites.Write onward) {
+        boolean[] first = {true};
+        return (last, content, written) -> {
+            if (first[0]) {
+                first[0] = false;
+                InterceptedWrites.stall(STALL_IN_WRITE_MILLIS);
+            }
+            onward.write(last, content, written);
+        };
     }
 
-    /** Outside the guard: the last write's success is reported 3 s after it happened. */
-    private static final class LateLastCompletion extends Handler.Wrapper {
-
-        @Override
-        public boolean handle(Request request, Response response, Callback callback) throws Exception {
-            Scheduler scheduler = request.getComponents().getScheduler();
-            return super.handle(request, new Response.Wrapper(request, response) {
-                @Override
-                public void write(boolean last, ByteBuffer content, Callback written) {
-                    super.write(last, content, !last ? written : Callback.from(
-                            () -> scheduler.schedule(written::succeeded, 3, TimeUnit.SECONDS), written::failed));
-                }
-            }, callback);
-        }
+    /** The last write's success is reported 3 s after it happened. */
+    private static InterceptedWrites.Write lateLastCompletion(Request request, InterceptedWrites.Write onward) {
+        Scheduler scheduler = request.getComponents().getScheduler();
+        return (last, content, written) -> onward.write(last, content, !last ? written : Callback.from(
+                () -> scheduler.schedule(written::succeeded, 3, TimeUnit.SECONDS), written::failed));
     }
 }

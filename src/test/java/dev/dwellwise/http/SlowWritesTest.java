@@ -10,17 +10,12 @@ import java.net.URI;
 import java.net.http.HttpClient;
 import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
-import java.nio.ByteBuffer;
 import java.time.Duration;
 import java.util.Map;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import org.eclipse.jetty.server.Handler;
-import org.eclipse.jetty.server.Request;
-import org.eclipse.jetty.server.Response;
-import org.eclipse.jetty.util.Callback;
 import org.eclipse.jetty.util.thread.QueuedThreadPool;
 import org.eclipse.jetty.util.thread.Scheduler;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -43,7 +38,7 @@ class SlowWritesTest {
     private static final byte[] ANSWER = "{\"status\":\"ready\"}".getBytes(US_ASCII);
     private static final long WRITE_DELAY_MILLIS = 50;
 
-    /** Writes that {@link DelayedWrites} handed on from another thread. */
+    /** Writes that {@link #delayedWrites} handed on from another thread. */
     private final AtomicInteger delays = new AtomicInteger();
 
     @ParameterizedTest
@@ -63,7 +58,7 @@ class SlowWritesTest {
             cfg.jetty.modifyServer(server -> {
                 HttpServerSettings.configure(server, config, errors, access);
                 // outermost: the delay falls inside every write they make
-                server.insertHandler(new DelayedWrites(handedOnLate));
+                server.insertHandler(delayedWrites(handedOnLate));
             });
             cfg.requestLogger.http(access::answered); // as App wires the access line
             cfg.routes.before(access::begin);
@@ -105,36 +100,21 @@ class SlowWritesTest {
      * Holds each write back for {@link #WRITE_DELAY_MILLIS}: in the writing thread, or by returning at
      * once and handing it on from the scheduler's thread then.
      */
-    private final class DelayedWrites extends Handler.Wrapper {
-
-        private final boolean handedOnLate;
-
-        DelayedWrites(boolean handedOnLate) {
-            this.handedOnLate = handedOnLate;
-        }
-
-        @Override
-        public boolean handle(Request request, Response response, Callback callback) throws Exception {
+    private InterceptedWrites delayedWrites(boolean handedOnLate) {
+        return new InterceptedWrites((request, onward) -> {
             Scheduler scheduler = request.getComponents().getScheduler();
-            return super.handle(request, new Response.Wrapper(request, response) {
-                @Override
-                public void write(boolean last, ByteBuffer content, Callback written) {
-                    if (handedOnLate) {
-                        // handed on from another thread later: the write waits, and its bytes go out late
-                        scheduler.schedule(() -> {
-                            delays.incrementAndGet();
-                            super.write(last, content, written);
-                        }, WRITE_DELAY_MILLIS, TimeUnit.MILLISECONDS);
-                        return;
-                    }
-                    try {
-                        Thread.sleep(WRITE_DELAY_MILLIS);
-                    } catch (InterruptedException e) {
-                        Thread.currentThread().interrupt();
-                    }
-                    super.write(last, content, written);
+            return (last, content, written) -> {
+                if (handedOnLate) {
+                    // handed on from another thread later: the write waits, and its bytes go out late
+                    scheduler.schedule(() -> {
+                        delays.incrementAndGet();
+                        onward.write(last, content, written);
+                    }, WRITE_DELAY_MILLIS, TimeUnit.MILLISECONDS);
+                    return;
                 }
-            }, callback);
-        }
+                InterceptedWrites.stall(WRITE_DELAY_MILLIS);
+                onward.write(last, content, written);
+            };
+        });
     }
 }
