@@ -1,10 +1,10 @@
 package dev.dwellwise.bench;
 
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.dwellwise.http.Services;
 import dev.dwellwise.job.Job;
 import dev.dwellwise.job.JobLimits;
 import dev.dwellwise.job.JobValidator;
+import dev.dwellwise.job.Output;
 import dev.dwellwise.job.ProblemBuilder;
 import dev.dwellwise.report.SimulationResult;
 import dev.dwellwise.thermal.ComputeBudget;
@@ -13,7 +13,6 @@ import dev.dwellwise.thermal.StageRunner;
 import dev.dwellwise.thermal.ThermalHistory;
 import dev.dwellwise.thermal.ThermalProblem;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -47,15 +46,15 @@ public class SimulationBenchmark {
     private byte[] summaryBody;
 
     @Setup
-    public void setUp() {
+    public void setUp() throws IOException {
         services = Services.bundled();
         job = services.examples().find(example).orElseThrow().job();
         Job valid = JobValidator.validated(job, services.materials(), JobLimits.standard());
         problem = new ProblemBuilder(services.materials()).build(valid, ComputeBudget.standard());
-        ObjectNode body = services.mapper().valueToTree(job);
-        ObjectNode output = body.get("output") instanceof ObjectNode given ? given : body.putObject("output");
-        output.put("series", false); // as src/load/run-load.sh sends it
-        summaryBody = body.toString().getBytes(StandardCharsets.UTF_8);
+        Output given = job.output() == null ? Output.DEFAULTS : job.output();
+        // the series off, as src/load/run-load.sh sends the job
+        summaryBody = services.mapper().writeValueAsBytes(
+                job.withOutput(new Output(given.sampleSeconds(), false, given.profiles())));
     }
 
     @Benchmark
